@@ -1,0 +1,160 @@
+// Row shapes of the SQLite catalog, shared by the generator (writes) and the site (reads).
+// Lengths and times are nondimensional unless the name carries a unit (Km, Days, S).
+
+export interface SystemRow {
+  id: string; // e.g. "earth-moon"
+  name: string; // e.g. "Earth–Moon"
+  mu: number;
+  lengthUnitKm: number;
+  timeUnitS: number;
+  primaryName: string;
+  secondaryName: string;
+  primaryLetter: string; // lap-signature letter, e.g. "E"
+  secondaryLetter: string; // e.g. "M"
+  primaryRadiusKm: number;
+  secondaryRadiusKm: number;
+  synodicPeriodDays: number | null; // null where no synodic period is configured
+  source: string; // where μ, LU, TU and radii come from
+}
+
+export interface RunRow {
+  id: number;
+  generatorVersion: string;
+  gitCommit: string;
+  configHash: string;
+  configPath: string;
+  scenarioName: string;
+  scenarioDescription: string;
+  rtol: number;
+  atol: number;
+  shard: string; // "k/n", "1/1" when not sharded
+  startedAt: string; // ISO 8601
+  finishedAt: string | null; // null while running or after an interruption
+}
+
+export type FamilyKind = 'cycler' | 'lyapunov-l1' | 'lyapunov-l2' | 'retrograde' | 'other';
+
+export interface FamilyRow {
+  id: string; // stable id, e.g. "earth-moon/E2M1/a"
+  systemId: string;
+  runId: number;
+  configKey: string; // the job (config entry) that produced it, used by resume
+  name: string; // display name from the config (may contain any characters)
+  kind: FamilyKind;
+  signature: string; // e.g. "E3M2"; reference families use their own label, e.g. "L1-Lyapunov"
+  primaryLaps: number;
+  secondaryLaps: number;
+  seedSegment: string; // "far-primary" | "between" | "far-secondary"
+  endReasonStart: string; // why continuation stopped at the start end
+  endReasonEnd: string; // why it stopped at the other end
+  memberCount: number;
+  jacobiMin: number;
+  jacobiMax: number;
+  periodDaysMin: number;
+  periodDaysMax: number;
+  stableWindowCount: number;
+}
+
+export interface OrbitRow {
+  id: string; // e.g. "earth-moon/E2M1/a/0042"
+  familyId: string;
+  seq: number; // order along the family (0, 1, 2, ...)
+  arclength: number; // continuation parameter s at this member
+  state0: [number, number, number, number, number, number]; // x,y,z,vx,vy,vz at t = 0
+  jacobi: number;
+  period: number; // nondimensional
+  periodDays: number;
+  stabilityIndex: number; // in-plane ν = (λ + 1/λ)/2
+  verticalStabilityIndex: number;
+  eigenvalues: Array<[number, number]>; // the four non-unit eigenvalues of the monodromy, [re, im]
+  monodromy: number[]; // 36 numbers, row-major
+  primaryMinRadiusKm: number; // closest distance to the larger body's centre
+  primaryMinAltKm: number; // ... minus its radius
+  secondaryMinRadiusKm: number;
+  secondaryMinAltKm: number;
+  maxDistanceKm: number; // largest distance from the barycentre
+  l1Passages: number; // crossings of the plane x = x(L1) inside the neck over one period
+  signature: string;
+  synodicP: number | null; // period / synodic month ≈ p / q
+  synodicQ: number | null;
+  synodicRelError: number | null;
+  closureError: number; // |state(T) − state(0)|, nondimensional
+  jacobiDrift: number; // |C(T) − C(0)|
+  stable: boolean; // in-plane |ν| < 1 (the vertical index is reported on its own)
+}
+
+export interface StableWindowRow {
+  id: string;
+  familyId: string;
+  fromJacobi: number;
+  toJacobi: number;
+  fromSecondaryMinAltKm: number;
+  toSecondaryMinAltKm: number;
+  widthKm: number;
+  widthJacobi: number;
+  fromArclength: number;
+  toArclength: number;
+  midOrbitId: string;
+  midPeriodDays: number;
+}
+
+export type BifurcationKind = 'tangent' | 'period-doubling';
+export type StabilityPlane = 'in-plane' | 'vertical';
+
+export interface BifurcationRow {
+  id: string;
+  familyId: string;
+  kind: BifurcationKind; // ν = +1 tangent, ν = −1 period doubling
+  plane: StabilityPlane; // which index crossed ±1
+  arclength: number;
+  jacobi: number;
+  secondaryMinAltKm: number;
+  periodDays: number;
+  state0: [number, number, number, number, number, number];
+}
+
+/** A family with everything under it, as written in one transaction. */
+export interface FamilyBundle {
+  family: FamilyRow;
+  orbits: OrbitRow[];
+  stableWindows: StableWindowRow[];
+  bifurcations: BifurcationRow[];
+}
+
+/** The invented scenario a catalog belongs to, kept in the meta table. */
+export interface ScenarioMeta {
+  name: string;
+  description: string;
+  team: string;
+}
+
+/** Read side of the catalog, used by the site build and by `export`. Implemented in catalog-db/query.ts. */
+export interface CatalogReader {
+  systems(): SystemRow[];
+  runs(): RunRow[]; // newest first
+  families(): FamilyRow[]; // ordered by systemId, then signature, then id
+  family(id: string): FamilyRow | undefined;
+  orbits(familyId?: string): OrbitRow[]; // ordered by familyId, seq
+  orbit(id: string): OrbitRow | undefined;
+  stableWindows(familyId?: string): StableWindowRow[];
+  bifurcations(familyId?: string): BifurcationRow[];
+  scenario(): ScenarioMeta | null; // null until setScenario has been called
+  close(): void;
+}
+
+/** Write side, used by the generator. Every call is one transaction. */
+export interface CatalogWriter {
+  upsertSystem(system: SystemRow): void;
+  startRun(run: Omit<RunRow, 'id' | 'finishedAt'>): number; // returns the run id
+  finishRun(runId: number, finishedAtIso: string): void;
+  /** True once every family of this config entry (job) has been written (resume skips it). */
+  jobDone(jobKey: string): boolean;
+  /** One transaction: replaces any family with the same id (and everything under it), all or nothing.
+   *  With completesJob, the job is marked done in the same transaction. */
+  writeFamily(bundle: FamilyBundle, completesJob?: string): void;
+  /** Marks a job done that produced no family (e.g. nothing found), in one transaction. */
+  markJobDone(jobKey: string, runId: number): void;
+  /** Stores the scenario's name, description and team (replaces any earlier ones). */
+  setScenario(scenario: ScenarioMeta): void;
+  close(): void;
+}

@@ -1,0 +1,10 @@
+export { spatialEquations } from './equations-spatial.ts';
+export { planarEquations } from './equations-planar.ts';
+export { spatialStmEquations } from './equations-spatial-stm.ts';
+export { planarStmEquations } from './equations-planar-stm.ts';
+export { jacobiConstant } from './jacobi-constant.ts';
+export { lagrangePoints, assertMassRatio } from './lagrange-points.ts';
+export type { LagrangePoint } from './lagrange-points.ts';
+export { linearPlanarPeriod } from './linear-planar-period.ts';
+export { SYSTEM_PRESETS, findSystemPreset, massRatioOf, timeUnitSecondsOf } from './system-presets.ts';
+export type { SystemPreset } from './system-presets.ts';

@@ -1,0 +1,146 @@
+// DOP853 driver: adaptive steps with the step-size control of Hairer, Nørsett & Wanner (1993), §II.4
+// (dop853.f with β = 0, so the previous error plays no part), optional dense output, and an observer called after every accepted step.
+import { attemptStep } from './attempt-step.ts';
+import { evaluateDenseOutput, prepareDenseOutput } from './dense-output.ts';
+import { initialStepSize } from './initial-step.ts';
+import { IntegrationError } from './integration-error.ts';
+import type { Dop853Workspace, Rhs } from './workspace.ts';
+
+export interface Dop853Options {
+  rtol: number;
+  atol: number;
+  /** Largest |h| allowed (default: the whole span). */
+  maxStep?: number;
+  /** Accepted + rejected steps allowed before giving up (default 1e6). */
+  maxSteps?: number;
+  /** First step; 0 or absent: estimated. */
+  initialStep?: number;
+  /** Compute dense output after every accepted step (3 more RHS evaluations per step). */
+  dense?: boolean;
+}
+
+export interface StepObserver {
+  /**
+   * Called after each accepted step from tOld to tNew; ws.y holds the state at tNew and, with dense output on,
+   * ws.cont interpolates the step. Returns a time in [tOld, tNew] at which to stop, or NaN to go on.
+   */
+  afterStep(ws: Dop853Workspace, tOld: number, tNew: number): number;
+}
+
+export interface Dop853Stats {
+  rhsEvaluations: number;
+  steps: number;
+  rejectedSteps: number;
+}
+
+export interface Dop853Result extends Dop853Stats {
+  /** Time reached: tEnd, or where the observer stopped the integration. The state is in ws.y. */
+  tFinal: number;
+  stoppedByObserver: boolean;
+}
+
+const SAFETY = 0.9;
+const FAC_MIN_INV = 1 / 0.333; // largest shrink 1/0.333
+const FAC_MAX_INV = 1 / 6; // largest growth 6
+const UNIT_ROUNDOFF = 2.3e-16;
+
+/** Integrates y' = f(t, y) from (t0, y0) to tEnd. The final state is left in ws.y. */
+export function integrateDop853(
+  rhs: Rhs, ws: Dop853Workspace, t0: number, y0: ArrayLike<number>, tEnd: number,
+  options: Dop853Options, observer?: StepObserver,
+): Dop853Result {
+  const n = ws.n;
+  const { rtol, atol } = options;
+  if (!(rtol > 0) || !(atol > 0)) throw new RangeError(`tolerances must be positive (rtol ${rtol}, atol ${atol})`);
+  const span = tEnd - t0;
+  const direction = span >= 0 ? 1 : -1;
+  const maxStep = Math.abs(options.maxStep ?? span) || Math.abs(span);
+  const maxSteps = options.maxSteps ?? 1_000_000;
+  const dense = options.dense ?? false;
+  for (let i = 0; i < n; i++) ws.y[i] = y0[i];
+  const result: Dop853Result = { tFinal: t0, stoppedByObserver: false, rhsEvaluations: 0, steps: 0, rejectedSteps: 0 };
+  if (span === 0) return result;
+
+  let t = t0;
+  rhs(t, ws.y, ws.k1);
+  let nfcn = 1;
+  let h = options.initialStep ? Math.abs(options.initialStep) * direction : 0;
+  if (h === 0) {
+    h = initialStepSize(rhs, ws, t, direction, maxStep, rtol, atol);
+    nfcn++;
+  }
+  let rejected = false;
+  let last = false;
+  let accepted = 0;
+  let rejections = 0;
+  let attempts = 0;
+
+  for (;;) {
+    if (attempts++ >= maxSteps) {
+      throw new IntegrationError(`step limit of ${maxSteps} steps reached at t = ${t}`, 'step-limit', t);
+    }
+    if (0.1 * Math.abs(h) <= Math.abs(t) * UNIT_ROUNDOFF || Math.abs(h) < 1e-300) {
+      throw new IntegrationError(`step size underflow (h = ${h}) at t = ${t}`, 'step-underflow', t);
+    }
+    if ((t + 1.01 * h - tEnd) * direction > 0) {
+      h = tEnd - t;
+      last = true;
+    }
+    const err = attemptStep(rhs, ws, t, h, rtol, atol);
+    nfcn += 11;
+    if (!Number.isFinite(err)) {
+      // A stage hit a singularity or overflowed: shrink hard and retry.
+      h *= 0.1;
+      rejected = true;
+      last = false;
+      rejections++;
+      continue;
+    }
+    const fac11 = err ** 0.125;
+    const fac = Math.max(FAC_MAX_INV, Math.min(FAC_MIN_INV, fac11 / SAFETY));
+    let hNew = h / fac;
+    if (err <= 1) {
+      accepted++;
+      const tNew = last ? tEnd : t + h;
+      rhs(tNew, ws.yNew, ws.k13);
+      nfcn++;
+      if (dense) {
+        prepareDenseOutput(rhs, ws, t, h);
+        nfcn += 3;
+      }
+      // Swap buffers instead of copying: yNew becomes y, f(t + h) becomes the next k1.
+      const yOld = ws.y;
+      ws.y = ws.yNew;
+      ws.yNew = yOld;
+      const kOld = ws.k1;
+      ws.k1 = ws.k13;
+      ws.k13 = kOld;
+      const tOld = t;
+      t = tNew;
+      if (observer) {
+        const tStop = observer.afterStep(ws, tOld, t);
+        if (tStop === tStop) {
+          if (tStop !== t) evaluateDenseOutput(ws, tStop, ws.y);
+          t = tStop;
+          result.stoppedByObserver = true;
+          break;
+        }
+      }
+      if (last) break;
+      if (Math.abs(hNew) > maxStep) hNew = direction * maxStep;
+      if (rejected) hNew = direction * Math.min(Math.abs(hNew), Math.abs(h));
+      rejected = false;
+    } else {
+      hNew = h / Math.min(FAC_MIN_INV, fac11 / SAFETY);
+      rejected = true;
+      last = false;
+      if (accepted >= 1) rejections++;
+    }
+    h = hNew;
+  }
+  result.tFinal = t;
+  result.rhsEvaluations = nfcn;
+  result.steps = accepted;
+  result.rejectedSteps = rejections;
+  return result;
+}

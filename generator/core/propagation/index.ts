@@ -1,0 +1,3 @@
+export { propagate, DEFAULT_TOLERANCE } from './propagate.ts';
+export type { PropagateOptions, PropagationResult } from './propagate.ts';
+export { distanceToPrimary, distanceToSecondary } from './primary-distances.ts';
