@@ -1,0 +1,50 @@
+// Evenly spaced samples of a trajectory, read off DOP853's dense output (no step-size restriction).
+import { spatialEquations } from '../cr3bp/equations-spatial.ts';
+import { assertMassRatio } from '../cr3bp/lagrange-points.ts';
+import { evaluateDenseOutput, integrateDop853, type Dop853Workspace, type StepObserver } from '../dop853/index.ts';
+import { DEFAULT_TOLERANCE } from './propagate.ts';
+import { workspaceFor } from './workspace-cache.ts';
+
+export interface TrajectorySamples {
+  timesNd: Float64Array;
+  /** 6 numbers per sample (x, y, z, vx, vy, vz); sample i is at timesNd[i]. */
+  states: Float64Array;
+}
+
+class Sampler implements StepObserver {
+  next = 1;
+  constructor(private readonly samples: TrajectorySamples, private readonly count: number) {}
+
+  afterStep(ws: Dop853Workspace, _tOld: number, tNew: number): number {
+    const { timesNd, states } = this.samples;
+    const forward = tNew >= timesNd[0];
+    while (this.next < this.count && (forward ? timesNd[this.next] <= tNew : timesNd[this.next] >= tNew)) {
+      evaluateDenseOutput(ws, timesNd[this.next], states.subarray(6 * this.next, 6 * this.next + 6), 6);
+      this.next++;
+    }
+    return NaN;
+  }
+}
+
+export function sampleTrajectory(
+  mu: number, state0: ArrayLike<number>, durationNd: number, sampleCount: number,
+  tolerance: { rtol: number; atol: number } = { rtol: DEFAULT_TOLERANCE, atol: DEFAULT_TOLERANCE },
+): TrajectorySamples {
+  assertMassRatio(mu);
+  if (state0.length !== 6) throw new RangeError(`state0 must have 6 numbers, got ${state0.length}`);
+  if (!Number.isInteger(sampleCount) || sampleCount < 2) {
+    throw new RangeError(`sampleCount must be an integer ≥ 2, got ${sampleCount}`);
+  }
+  if (!Number.isFinite(durationNd) || durationNd === 0) throw new RangeError(`durationNd must be a nonzero finite number, got ${durationNd}`);
+  const timesNd = new Float64Array(sampleCount);
+  for (let i = 0; i < sampleCount; i++) timesNd[i] = (durationNd * i) / (sampleCount - 1);
+  const states = new Float64Array(6 * sampleCount);
+  for (let i = 0; i < 6; i++) states[i] = state0[i];
+  const samples = { timesNd, states };
+  const ws = workspaceFor(6);
+  const sampler = new Sampler(samples, sampleCount);
+  integrateDop853(spatialEquations(mu), ws, 0, state0, durationNd, { ...tolerance, dense: true }, sampler);
+  // The last sample is the integrator's own end point, not an interpolation.
+  for (let i = 0; i < 6; i++) states[6 * (sampleCount - 1) + i] = ws.y[i];
+  return samples;
+}
