@@ -1,0 +1,61 @@
+// Read side of the catalog (CatalogReader) over an open connection; statements are prepared once
+// because the site build calls orbits(familyId) once per family page.
+import type { Database } from 'better-sqlite3';
+import { prepareMetaStore } from './meta.ts';
+import type { SqlRecord } from './row-mapping.ts';
+import {
+  bifurcationTable,
+  familyTable,
+  orbitTable,
+  runTable,
+  stableWindowTable,
+  systemTable,
+} from './table-columns.ts';
+import type { CatalogReader } from './types.ts';
+
+/** The reader owns the connection: close() closes it. */
+export function createCatalogReader(db: Database): CatalogReader {
+  const all = (sql: string) => {
+    const statement = db.prepare(sql);
+    return (...params: unknown[]) => statement.all(...params) as SqlRecord[];
+  };
+  const one = (sql: string) => {
+    const statement = db.prepare(sql);
+    return (...params: unknown[]) => statement.get(...params) as SqlRecord | undefined;
+  };
+  const q = {
+    systems: all('SELECT * FROM systems ORDER BY id'),
+    runs: all('SELECT * FROM runs ORDER BY started_at DESC, id DESC'),
+    families: all('SELECT * FROM families ORDER BY system_id, signature, id'),
+    family: one('SELECT * FROM families WHERE id = ?'),
+    allOrbits: all('SELECT * FROM orbits ORDER BY family_id, seq'),
+    familyOrbits: all('SELECT * FROM orbits WHERE family_id = ? ORDER BY seq'),
+    orbit: one('SELECT * FROM orbits WHERE id = ?'),
+    allWindows: all('SELECT * FROM stable_windows ORDER BY family_id, from_arclength, id'),
+    familyWindows: all('SELECT * FROM stable_windows WHERE family_id = ? ORDER BY from_arclength, id'),
+    allBifurcations: all('SELECT * FROM bifurcations ORDER BY family_id, arclength, id'),
+    familyBifurcations: all('SELECT * FROM bifurcations WHERE family_id = ? ORDER BY arclength, id'),
+  };
+  const meta = prepareMetaStore(db);
+  return {
+    systems: () => q.systems().map(systemTable.fromRecord),
+    runs: () => q.runs().map(runTable.fromRecord),
+    families: () => q.families().map(familyTable.fromRecord),
+    family: (id) => mapOptional(q.family(id), familyTable.fromRecord),
+    orbits: (familyId) =>
+      (familyId === undefined ? q.allOrbits() : q.familyOrbits(familyId)).map(orbitTable.fromRecord),
+    orbit: (id) => mapOptional(q.orbit(id), orbitTable.fromRecord),
+    stableWindows: (familyId) =>
+      (familyId === undefined ? q.allWindows() : q.familyWindows(familyId)).map(stableWindowTable.fromRecord),
+    bifurcations: (familyId) =>
+      (familyId === undefined ? q.allBifurcations() : q.familyBifurcations(familyId)).map(
+        bifurcationTable.fromRecord,
+      ),
+    scenario: () => meta.getScenario(),
+    close: () => db.close(),
+  };
+}
+
+function mapOptional<T>(record: SqlRecord | undefined, map: (record: SqlRecord) => T): T | undefined {
+  return record === undefined ? undefined : map(record);
+}

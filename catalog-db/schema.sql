@@ -1,0 +1,133 @@
+-- Schema of a cycler-atlas catalog (SQLite). Applied once to a new file by create-schema.ts,
+-- which also sets PRAGMA user_version to CATALOG_SCHEMA_VERSION (schema-version.ts).
+-- Column names are the snake_case forms of the row fields in types.ts (mapping in table-columns.ts).
+-- Arrays (state0, eigenvalues, monodromy) are JSON text. STRICT tables reject values of the wrong type.
+
+CREATE TABLE systems (
+  id                  TEXT PRIMARY KEY,
+  name                TEXT NOT NULL,
+  mu                  REAL NOT NULL,
+  length_unit_km      REAL NOT NULL,
+  time_unit_s         REAL NOT NULL,
+  primary_name        TEXT NOT NULL,
+  secondary_name      TEXT NOT NULL,
+  primary_letter      TEXT NOT NULL,
+  secondary_letter    TEXT NOT NULL,
+  primary_radius_km   REAL NOT NULL,
+  secondary_radius_km REAL NOT NULL,
+  synodic_period_days REAL,
+  source              TEXT NOT NULL
+) STRICT;
+
+CREATE TABLE runs (
+  id                   INTEGER PRIMARY KEY,
+  generator_version    TEXT NOT NULL,
+  git_commit           TEXT NOT NULL,
+  config_hash          TEXT NOT NULL,
+  config_path          TEXT NOT NULL,
+  scenario_name        TEXT NOT NULL,
+  scenario_description TEXT NOT NULL,
+  rtol                 REAL NOT NULL,
+  atol                 REAL NOT NULL,
+  shard                TEXT NOT NULL,
+  started_at           TEXT NOT NULL,
+  finished_at          TEXT
+) STRICT;
+
+CREATE TABLE families (
+  id                  TEXT PRIMARY KEY,
+  system_id           TEXT NOT NULL REFERENCES systems (id),
+  run_id              INTEGER NOT NULL REFERENCES runs (id),
+  config_key          TEXT NOT NULL,
+  name                TEXT NOT NULL,
+  kind                TEXT NOT NULL CHECK (kind IN ('cycler', 'lyapunov-l1', 'lyapunov-l2', 'retrograde', 'other')),
+  signature           TEXT NOT NULL,
+  primary_laps        INTEGER NOT NULL,
+  secondary_laps      INTEGER NOT NULL,
+  seed_segment        TEXT NOT NULL,
+  end_reason_start    TEXT NOT NULL,
+  end_reason_end      TEXT NOT NULL,
+  member_count        INTEGER NOT NULL,
+  jacobi_min          REAL NOT NULL,
+  jacobi_max          REAL NOT NULL,
+  period_days_min     REAL NOT NULL,
+  period_days_max     REAL NOT NULL,
+  stable_window_count INTEGER NOT NULL
+) STRICT;
+
+CREATE TABLE orbits (
+  id                       TEXT PRIMARY KEY,
+  family_id                TEXT NOT NULL REFERENCES families (id) ON DELETE CASCADE,
+  seq                      INTEGER NOT NULL,
+  arclength                REAL NOT NULL,
+  state0                   TEXT NOT NULL CHECK (json_array_length(state0) = 6),
+  jacobi                   REAL NOT NULL,
+  period                   REAL NOT NULL,
+  period_days              REAL NOT NULL,
+  stability_index          REAL NOT NULL,
+  vertical_stability_index REAL NOT NULL,
+  eigenvalues              TEXT NOT NULL CHECK (json_valid(eigenvalues)),
+  monodromy                TEXT NOT NULL CHECK (json_array_length(monodromy) = 36),
+  primary_min_radius_km    REAL NOT NULL,
+  primary_min_alt_km       REAL NOT NULL,
+  secondary_min_radius_km  REAL NOT NULL,
+  secondary_min_alt_km     REAL NOT NULL,
+  max_distance_km          REAL NOT NULL,
+  l1_passages              INTEGER NOT NULL,
+  signature                TEXT NOT NULL,
+  synodic_p                INTEGER,
+  synodic_q                INTEGER,
+  synodic_rel_error        REAL,
+  closure_error            REAL NOT NULL,
+  jacobi_drift             REAL NOT NULL,
+  stable                   INTEGER NOT NULL CHECK (stable IN (0, 1))
+) STRICT;
+
+CREATE TABLE stable_windows (
+  id                        TEXT PRIMARY KEY,
+  family_id                 TEXT NOT NULL REFERENCES families (id) ON DELETE CASCADE,
+  from_jacobi               REAL NOT NULL,
+  to_jacobi                 REAL NOT NULL,
+  from_secondary_min_alt_km REAL NOT NULL,
+  to_secondary_min_alt_km   REAL NOT NULL,
+  width_km                  REAL NOT NULL,
+  width_jacobi              REAL NOT NULL,
+  from_arclength            REAL NOT NULL,
+  to_arclength              REAL NOT NULL,
+  -- the member nearest the window's middle; must be an orbit of the catalog (the site links to it)
+  mid_orbit_id              TEXT NOT NULL REFERENCES orbits (id) ON DELETE CASCADE,
+  mid_period_days           REAL NOT NULL
+) STRICT;
+
+CREATE TABLE bifurcations (
+  id                   TEXT PRIMARY KEY,
+  family_id            TEXT NOT NULL REFERENCES families (id) ON DELETE CASCADE,
+  kind                 TEXT NOT NULL CHECK (kind IN ('tangent', 'period-doubling')),
+  plane                TEXT NOT NULL CHECK (plane IN ('in-plane', 'vertical')),
+  arclength            REAL NOT NULL,
+  jacobi               REAL NOT NULL,
+  secondary_min_alt_km REAL NOT NULL,
+  period_days          REAL NOT NULL,
+  state0               TEXT NOT NULL CHECK (json_array_length(state0) = 6)
+) STRICT;
+
+-- One row per config entry (job) whose families are all written; resume skips these.
+CREATE TABLE jobs (
+  job_key TEXT PRIMARY KEY,
+  run_id  INTEGER NOT NULL REFERENCES runs (id),
+  done_at TEXT NOT NULL
+) STRICT;
+
+-- Catalog-wide key/value facts: scenario.name, scenario.description, scenario.team.
+CREATE TABLE meta (
+  key   TEXT PRIMARY KEY,
+  value TEXT NOT NULL
+) STRICT;
+
+-- The site lists families by system and signature and reads each family's members in order.
+CREATE INDEX families_by_system_signature ON families (system_id, signature, id);
+CREATE UNIQUE INDEX orbits_by_family_seq ON orbits (family_id, seq);
+CREATE INDEX stable_windows_by_family ON stable_windows (family_id, from_arclength);
+-- Without this index every deleted orbit would scan stable_windows for the cascade.
+CREATE INDEX stable_windows_by_mid_orbit ON stable_windows (mid_orbit_id);
+CREATE INDEX bifurcations_by_family ON bifurcations (family_id, arclength);

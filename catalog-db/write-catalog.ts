@@ -1,0 +1,75 @@
+// Write side of the catalog (CatalogWriter) over an open connection. Every method is one
+// transaction; statements are prepared once.
+import type { Database } from 'better-sqlite3';
+import { prepareMetaStore } from './meta.ts';
+import { prepareReplaceFamily } from './replace-family.ts';
+import { runTable, systemTable } from './table-columns.ts';
+import type { CatalogWriter } from './types.ts';
+
+/** The writer owns the connection: close() closes it. */
+export function createCatalogWriter(db: Database): CatalogWriter {
+  const nonKeyColumns = systemTable.columns.filter((column) => column !== 'id');
+  const upsertSystem = db.prepare(
+    `${systemTable.insertSql} ON CONFLICT (id) DO UPDATE SET ${nonKeyColumns.map((c) => `${c} = excluded.${c}`).join(', ')}`,
+  );
+  const insertRun = db.prepare(runTable.insertSql);
+  const finishRun = db.prepare('UPDATE runs SET finished_at = ? WHERE id = ?');
+  const runExists = db.prepare('SELECT 1 FROM runs WHERE id = ?').pluck();
+  const jobDone = db.prepare('SELECT 1 FROM jobs WHERE job_key = ?').pluck();
+  const upsertJob = db.prepare(
+    'INSERT INTO jobs (job_key, run_id, done_at) VALUES (?, ?, ?) ' +
+      'ON CONFLICT (job_key) DO UPDATE SET run_id = excluded.run_id, done_at = excluded.done_at',
+  );
+  const replaceFamily = prepareReplaceFamily(db);
+  const meta = prepareMetaStore(db);
+
+  const markJob = (jobKey: string, runId: number, where: string) => {
+    if (typeof jobKey !== 'string' || jobKey === '') throw new Error(`${where}: jobKey must be a non-empty string`);
+    if (runExists.get(runId) === undefined) throw new Error(`${where}: runId ${runId} is not in the catalog`);
+    upsertJob.run(jobKey, runId, new Date().toISOString());
+  };
+
+  const writeFamilyTransaction = db.transaction((bundle: Parameters<CatalogWriter['writeFamily']>[0], job?: string) => {
+    replaceFamily(bundle);
+    if (job !== undefined) markJob(job, bundle.family.runId, 'completesJob');
+  });
+
+  return {
+    upsertSystem(system) {
+      upsertSystem.run(systemTable.toRecord(system));
+    },
+    startRun(run) {
+      const record = runTable.toRecord({ ...run, id: 0, finishedAt: null });
+      record.id = null; // NULL lets SQLite pick the next id
+      return Number(insertRun.run(record).lastInsertRowid);
+    },
+    finishRun(runId, finishedAtIso) {
+      if (typeof finishedAtIso !== 'string' || Number.isNaN(Date.parse(finishedAtIso))) {
+        throw new Error(`finishRun: finishedAtIso must be an ISO 8601 date-time, got ${String(finishedAtIso)}`);
+      }
+      if (finishRun.run(finishedAtIso, runId).changes === 0) {
+        throw new Error(`finishRun: runId ${runId} is not in the catalog`);
+      }
+    },
+    jobDone(jobKey) {
+      return jobDone.get(jobKey) !== undefined;
+    },
+    writeFamily(bundle, completesJob) {
+      try {
+        writeFamilyTransaction(bundle, completesJob);
+      } catch (error) {
+        const message = error instanceof Error ? error.message : String(error);
+        throw new Error(`writeFamily ${bundle?.family?.id}: nothing written (${message})`, { cause: error });
+      }
+    },
+    markJobDone(jobKey, runId) {
+      db.transaction(() => markJob(jobKey, runId, 'markJobDone'))();
+    },
+    setScenario(scenario) {
+      meta.setScenario(scenario);
+    },
+    close() {
+      db.close();
+    },
+  };
+}
