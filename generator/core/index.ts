@@ -3,3 +3,4 @@ export * from './dop853/index.ts';
 export * from './cr3bp/index.ts';
 export * from './events/index.ts';
 export * from './propagation/index.ts';
+export * from './orbits/index.ts';

@@ -1,7 +1,12 @@
 // Brent's method for a bracketed root (Brent 1973, Algorithms for Minimization without Derivatives, ch. 4).
 
-/** Root of f in [a, b] where f(a) and f(b) differ in sign (or one is zero), to |Δx| ≤ tol. */
-export function findRootBrent(f: (x: number) => number, a: number, b: number, fa: number, fb: number, tol: number): number {
+/**
+ * Root of f in [a, b] where f(a) and f(b) differ in sign (or one is zero), to |Δx| ≤ tol,
+ * or sooner where |f| ≤ fTolerance.
+ */
+export function findRootBrent(
+  f: (x: number) => number, a: number, b: number, fa: number, fb: number, tol: number, fTolerance = 0,
+): number {
   if (fa === 0) return a;
   if (fb === 0) return b;
   if (fa * fb > 0) throw new RangeError(`root not bracketed: f(${a}) = ${fa}, f(${b}) = ${fb}`);
@@ -19,7 +24,7 @@ export function findRootBrent(f: (x: number) => number, a: number, b: number, fa
     }
     const tol1 = 2 * Number.EPSILON * Math.abs(b) + 0.5 * tol;
     const half = 0.5 * (c - b);
-    if (Math.abs(half) <= tol1 || fb === 0) return b;
+    if (Math.abs(half) <= tol1 || Math.abs(fb) <= fTolerance) return b;
     if (Math.abs(e) >= tol1 && Math.abs(fa) > Math.abs(fb)) {
       const s = fb / fa;
       let p: number;

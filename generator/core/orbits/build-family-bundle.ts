@@ -1,0 +1,126 @@
+// Turns a continued, analysed family into catalog rows (nondimensional values plus km and days).
+import type { BifurcationRow, FamilyBundle, FamilyKind, OrbitRow, StableWindowRow } from '../../../catalog-db/types.ts';
+import type { EndReason } from './continue-family.ts';
+import type { FamilyMember } from './family-member.ts';
+import type { SystemSpec } from './family-job.ts';
+import { formatSignature } from './lap-signature.ts';
+import type { StabilityMap } from './locate-stability-changes.ts';
+import { synodicLock } from './synodic-lock.ts';
+
+export interface FamilyIdentity {
+  id: string;
+  jobKey: string;
+  name: string;
+  kind: FamilyKind;
+  /** The signature label (cyclers: E{n}M{m}; reference families: their own label). */
+  signature: string;
+  seedSegment: string;
+}
+
+const SECONDS_PER_DAY = 86400;
+
+export function orbitRowOf(system: SystemSpec, familyId: string, seq: number, member: FamilyMember): OrbitRow {
+  const a = member.analysis;
+  const km = system.lengthUnitKm;
+  const periodDays = (a.periodNd * system.timeUnitS) / SECONDS_PER_DAY;
+  const lock = system.synodicPeriodDays ? synodicLock(periodDays, system.synodicPeriodDays) : null;
+  return {
+    id: `${familyId}/${String(seq).padStart(4, '0')}`,
+    familyId,
+    seq,
+    arclength: member.arclength,
+    state0: [...a.state0],
+    jacobi: a.jacobi,
+    period: a.periodNd,
+    periodDays,
+    stabilityIndex: a.stabilityIndex,
+    verticalStabilityIndex: a.verticalStabilityIndex,
+    eigenvalues: a.eigenvalues,
+    monodromy: Array.from(a.monodromy),
+    primaryMinRadiusKm: a.primaryMinDistanceNd * km,
+    primaryMinAltKm: a.primaryMinDistanceNd * km - system.primaryRadiusKm,
+    secondaryMinRadiusKm: a.secondaryMinDistanceNd * km,
+    secondaryMinAltKm: a.secondaryMinDistanceNd * km - system.secondaryRadiusKm,
+    maxDistanceKm: a.maxDistanceNd * km,
+    l1Passages: a.l1Passages,
+    signature: formatSignature(system.primaryLetter, system.secondaryLetter, a.laps),
+    synodicP: lock ? lock.p : null,
+    synodicQ: lock ? lock.q : null,
+    synodicRelError: lock ? lock.relativeError : null,
+    closureError: a.closureError,
+    jacobiDrift: a.jacobiDrift,
+    stable: Math.abs(a.stabilityIndex) < 1,
+  };
+}
+
+export function buildFamilyBundle(
+  system: SystemSpec, identity: FamilyIdentity, map: StabilityMap, ends: { start: EndReason; end: EndReason },
+): FamilyBundle {
+  const id = identity.id;
+  // Window middles join the member list so that every window names a stored orbit.
+  const members = [...map.members];
+  for (const w of map.windows) if (!members.includes(w.middle)) members.push(w.middle);
+  members.sort((p, q) => p.arclength - q.arclength);
+  const orbits = members.map((m, seq) => orbitRowOf(system, id, seq, m));
+  const rowOf = new Map(members.map((m, i) => [m, orbits[i]]));
+
+  const stableWindows: StableWindowRow[] = map.windows.map((w, k) => {
+    const from = rowOf.get(w.from)!, to = rowOf.get(w.to)!, middle = rowOf.get(w.middle)!;
+    return {
+      id: `${id}/window-${k + 1}`,
+      familyId: id,
+      fromJacobi: from.jacobi,
+      toJacobi: to.jacobi,
+      fromSecondaryMinAltKm: from.secondaryMinAltKm,
+      toSecondaryMinAltKm: to.secondaryMinAltKm,
+      widthKm: Math.abs(to.secondaryMinAltKm - from.secondaryMinAltKm),
+      widthJacobi: Math.abs(to.jacobi - from.jacobi),
+      fromArclength: from.arclength,
+      toArclength: to.arclength,
+      midOrbitId: middle.id,
+      midPeriodDays: middle.periodDays,
+    };
+  });
+  const bifurcations: BifurcationRow[] = map.changes.map((c, k) => {
+    const row = rowOf.get(c.member)!;
+    return {
+      id: `${id}/bifurcation-${k + 1}`,
+      familyId: id,
+      kind: c.target === 1 ? 'tangent' : 'period-doubling',
+      plane: c.kind,
+      arclength: row.arclength,
+      jacobi: row.jacobi,
+      secondaryMinAltKm: row.secondaryMinAltKm,
+      periodDays: row.periodDays,
+      state0: row.state0,
+    };
+  });
+  const jacobis = orbits.map((o) => o.jacobi);
+  const periods = orbits.map((o) => o.periodDays);
+  const first = members[0].analysis.laps;
+  return {
+    family: {
+      id,
+      systemId: system.id,
+      runId: 0,
+      configKey: identity.jobKey,
+      name: identity.name,
+      kind: identity.kind,
+      signature: identity.signature,
+      primaryLaps: first.primaryLaps,
+      secondaryLaps: first.secondaryLaps,
+      seedSegment: identity.seedSegment,
+      endReasonStart: ends.start,
+      endReasonEnd: ends.end,
+      memberCount: orbits.length,
+      jacobiMin: Math.min(...jacobis),
+      jacobiMax: Math.max(...jacobis),
+      periodDaysMin: Math.min(...periods),
+      periodDaysMax: Math.max(...periods),
+      stableWindowCount: stableWindows.length,
+    },
+    orbits,
+    stableWindows,
+    bifurcations,
+  };
+}

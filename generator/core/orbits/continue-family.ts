@@ -1,0 +1,145 @@
+// Pseudo-arclength continuation of a family of symmetric periodic orbits (Keller 1977; Doedel et al. 2007)
+// in (x0, vy0), through folds of C, with a step rule that keeps every change of asinh(ν) small so that
+// no stable window is stepped over.
+import { analyseOrbit, type AnalysisContext } from './analyse-orbit.ts';
+import { correctOnArc, familyTangent, type CorrectedOrbit, type CorrectorOptions } from './correct-on-arc.ts';
+import type { FamilyMember } from './family-member.ts';
+
+export type EndReason =
+  | 'member-limit' | 'jacobi-range' | 'period-limit' | 'collision-primary' | 'collision-secondary'
+  | 'signature-change' | 'lost-l1-passage' | 'no-convergence' | 'unstable-far-from-windows' | 'interrupted';
+
+export interface ContinuationRules {
+  maxMembers: number;
+  jacobiMin: number;
+  jacobiMax: number;
+  maxPeriodNd: number;
+  unstableStop: { indexAbove: number; members: number };
+  initialStepNd: number;
+  maxStepNd: number;
+  minStepNd: number;
+  /** Largest change of asinh(ν) (in-plane and vertical) between neighbours. */
+  maxIndexJump: number;
+  /** Largest relative change of the period between neighbours. */
+  maxPeriodJump: number;
+  primaryRadiusNd: number;
+  secondaryRadiusNd: number;
+  /** Lap counts the family must keep (null: not checked, for reference families). */
+  laps: { primaryLaps: number; secondaryLaps: number } | null;
+  /** The family passes the L1 neck and must keep doing so. */
+  needsNeckPassage: boolean;
+}
+
+export interface ContinuationResult {
+  members: FamilyMember[];
+  endReasonStart: EndReason;
+  endReasonEnd: EndReason;
+}
+
+export interface ContinuationHooks {
+  onMember?(count: number): void;
+  shouldStop?(): boolean;
+}
+
+export function memberFrom(context: AnalysisContext, corrected: CorrectedOrbit, arclength: number, previousTangent?: readonly [number, number]): FamilyMember {
+  const tHalf = corrected.shot.tHalfNd;
+  return {
+    x0: corrected.x0,
+    vy0: corrected.vy0,
+    xHalf: corrected.shot.state[0],
+    tHalfNd: tHalf,
+    arclength,
+    analysis: analyseOrbit(context, corrected.x0, corrected.vy0, 2 * tHalf),
+    tangent: familyTangent(corrected.shot, previousTangent),
+  };
+}
+
+/** Why this member may not join the family, or null when it may. */
+function endReasonOf(member: FamilyMember, rules: ContinuationRules): EndReason | null {
+  const a = member.analysis;
+  if (a.primaryMinDistanceNd < rules.primaryRadiusNd) return 'collision-primary';
+  if (a.secondaryMinDistanceNd < rules.secondaryRadiusNd) return 'collision-secondary';
+  if (a.jacobi < rules.jacobiMin || a.jacobi > rules.jacobiMax) return 'jacobi-range';
+  if (a.periodNd > rules.maxPeriodNd) return 'period-limit';
+  if (rules.needsNeckPassage && a.l1Passages === 0) return 'lost-l1-passage';
+  if (rules.laps && (a.laps.primaryLaps !== rules.laps.primaryLaps || a.laps.secondaryLaps !== rules.laps.secondaryLaps)) {
+    return 'signature-change';
+  }
+  return null;
+}
+
+function tooFar(previous: FamilyMember, next: FamilyMember, rules: ContinuationRules): boolean {
+  const a = previous.analysis, b = next.analysis;
+  return Math.abs(Math.asinh(a.stabilityIndex) - Math.asinh(b.stabilityIndex)) > rules.maxIndexJump
+    || Math.abs(Math.asinh(a.verticalStabilityIndex) - Math.asinh(b.verticalStabilityIndex)) > rules.maxIndexJump
+    || Math.abs(a.periodNd - b.periodNd) > rules.maxPeriodJump * a.periodNd;
+}
+
+/** Continues from `start` in one direction (sign ±1 along its tangent); returns the new members in order. */
+function march(
+  context: AnalysisContext, halfCrossings: number, start: FamilyMember, sign: 1 | -1, budget: number,
+  rules: ContinuationRules, corrector: CorrectorOptions, hooks: ContinuationHooks, counted: { n: number },
+): { members: FamilyMember[]; end: EndReason } {
+  const members: FamilyMember[] = [];
+  let current = start;
+  let tangent: [number, number] = [sign * start.tangent[0], sign * start.tangent[1]];
+  let step = rules.initialStepNd;
+  let unstableRun = 0;
+  for (;;) {
+    if (members.length >= budget) return { members, end: 'member-limit' };
+    if (hooks.shouldStop?.()) return { members, end: 'interrupted' };
+    const options = { ...corrector, maxTimeNd: Math.min(rules.maxPeriodNd, 3 * current.tHalfNd) };
+    const corrected = correctOnArc(context.mu, halfCrossings, [current.x0, current.vy0], tangent, step, options);
+    let next: FamilyMember | null = null;
+    if (corrected) {
+      try {
+        next = memberFrom(context, corrected, current.arclength + sign * Math.hypot(corrected.x0 - current.x0, corrected.vy0 - current.vy0), tangent);
+      } catch {
+        next = null; // the full-period propagation failed (collision inside a body's centre, step limit)
+      }
+    }
+    const smaller = step * 0.5;
+    if (!next || (tooFar(current, next, rules) && smaller >= rules.minStepNd)) {
+      if (smaller < rules.minStepNd) return { members, end: 'no-convergence' };
+      step = smaller;
+      continue;
+    }
+    const reason = endReasonOf(next, rules);
+    if (reason) {
+      // Close in on the boundary before giving up, so the family reaches as far as it truly goes.
+      if (step * 0.25 >= rules.minStepNd * 64) {
+        step *= 0.25;
+        continue;
+      }
+      return { members, end: reason };
+    }
+    // The stored tangent points toward growing arclength whichever way we march.
+    next.tangent = sign === 1 ? next.tangent : [-next.tangent[0], -next.tangent[1]];
+    members.push(next);
+    counted.n++;
+    hooks.onMember?.(counted.n);
+    tangent = familyTangent(corrected!.shot, tangent);
+    unstableRun = Math.abs(next.analysis.stabilityIndex) > rules.unstableStop.indexAbove ? unstableRun + 1 : 0;
+    if (unstableRun >= rules.unstableStop.members) return { members, end: 'unstable-far-from-windows' };
+    if (corrected!.iterations <= 3 && !tooFar(current, next, { ...rules, maxIndexJump: rules.maxIndexJump / 2, maxPeriodJump: rules.maxPeriodJump / 2 })) {
+      step = Math.min(step * 1.5, rules.maxStepNd);
+    }
+    current = next;
+  }
+}
+
+/** Continues a family both ways from a corrected seed; members come ordered by arclength. */
+export function continueFamily(
+  context: AnalysisContext, halfCrossings: number, seed: FamilyMember, rules: ContinuationRules,
+  corrector: CorrectorOptions, hooks: ContinuationHooks = {},
+): ContinuationResult {
+  const counted = { n: 1 };
+  const budget = Math.max(0, rules.maxMembers - 1);
+  const forward = march(context, halfCrossings, seed, 1, Math.ceil(budget / 2), rules, corrector, hooks, counted);
+  const backward = march(context, halfCrossings, seed, -1, budget - forward.members.length, rules, corrector, hooks, counted);
+  return {
+    members: [...backward.members.reverse(), seed, ...forward.members],
+    endReasonStart: backward.end,
+    endReasonEnd: forward.end,
+  };
+}

@@ -1,0 +1,82 @@
+// What one unit of generator work asks for (a "job": one config entry for one system) and what it yields.
+// The run layer builds jobs from the validated config and writes the bundles to the catalog.
+import type { FamilyBundle } from '../../../catalog-db/types.ts';
+
+export type AxisSegment = 'far-primary' | 'between' | 'far-secondary';
+
+export type SeedRule =
+  | {
+    /** Symmetric orbits of one lap signature found by scanning the x-axis at fixed Jacobi constants. */
+    kind: 'lap-signature';
+    signature: string; // e.g. "E2M1" (letters of the system)
+    jacobiValues: number[]; // C values to scan at (between the L3 and L1 values)
+    segments: AxisSegment[];
+    /** Start direction(s) of ẏ: +1, −1. */
+    directions: Array<1 | -1>;
+    /** Largest crossing count of y = 0 tried for the half period. */
+    maxHalfCrossings: number;
+    /** Start points per segment in the scan. */
+    gridPoints: number;
+  }
+  | { kind: 'lyapunov'; point: 'L1' | 'L2'; amplitudeNd: number }
+  | { kind: 'retrograde'; distanceNd: number };
+
+export interface FamilyLimits {
+  maxMembers: number; // per family, both directions together
+  jacobiMin: number;
+  jacobiMax: number;
+  maxPeriodNd: number;
+  /** Stop following a family once |ν| has stayed above indexAbove for this many members in a row. */
+  unstableStop: { indexAbove: number; members: number };
+  initialStepNd: number; // first pseudo-arclength step
+  maxStepNd: number;
+}
+
+export interface SystemSpec {
+  id: string;
+  name: string;
+  mu: number;
+  lengthUnitKm: number;
+  timeUnitS: number;
+  primaryName: string;
+  secondaryName: string;
+  primaryLetter: string;
+  secondaryLetter: string;
+  primaryRadiusKm: number;
+  secondaryRadiusKm: number;
+  synodicPeriodDays: number | null;
+  source: string;
+}
+
+export interface FamilyJob {
+  /** Stable key of the config entry (resume skips finished keys), e.g. "earth-moon:E2M1". */
+  key: string;
+  /** Display name for the family or families it yields (from the config; any characters). */
+  name: string;
+  system: SystemSpec;
+  seed: SeedRule;
+  limits: FamilyLimits;
+  tolerance: { rtol: number; atol: number };
+  /** Window edges located to this accuracy in ν. */
+  indexTolerance: number;
+}
+
+export interface JobProgress {
+  jobKey: string;
+  familyLabel: string; // e.g. "E2M1/b"
+  familiesDone: number;
+  members: number; // members of the family in progress so far
+  maxMembers: number;
+}
+
+export interface JobHooks {
+  onProgress?(progress: JobProgress): void;
+  /** Polled between members; true stops the job after the current member (interrupted families are marked so). */
+  shouldStop?(): boolean;
+}
+
+export interface JobResult {
+  /** Families found, complete unless `interrupted`. runId is 0: the writer sets it. */
+  bundles: FamilyBundle[];
+  interrupted: boolean;
+}

@@ -1,0 +1,14 @@
+import type { OrbitAnalysis } from './analyse-orbit.ts';
+
+/** One corrected and analysed orbit of a family, at arclength s along the family curve in (x0, vy0). */
+export interface FamilyMember {
+  x0: number;
+  vy0: number;
+  /** x of the second perpendicular crossing (at T/2). */
+  xHalf: number;
+  tHalfNd: number;
+  arclength: number;
+  analysis: OrbitAnalysis;
+  /** Unit tangent of the family curve here, pointing in the direction of growing arclength. */
+  tangent: [number, number];
+}

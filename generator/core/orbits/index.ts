@@ -1,0 +1,15 @@
+export { runFamilyJob } from './run-family-job.ts';
+export type { FamilyJob, SeedRule, FamilyLimits, SystemSpec, JobHooks, JobProgress, JobResult, AxisSegment } from './family-job.ts';
+export { verifyOrbit } from './verify-orbit.ts';
+export type { OrbitCheck } from './verify-orbit.ts';
+export { analyseOrbit } from './analyse-orbit.ts';
+export type { OrbitAnalysis, AnalysisContext } from './analyse-orbit.ts';
+export { countLaps, formatSignature, parseSignature } from './lap-signature.ts';
+export { synodicLock } from './synodic-lock.ts';
+export { stabilityIndices, eigenvaluePair } from './stability-indices.ts';
+export { neckHalfWidth } from './neck-half-width.ts';
+export { halfPeriodShot, crossingVxGradient } from './half-period-shot.ts';
+export { correctOnArc, correctAtFixedX0, familyTangent } from './correct-on-arc.ts';
+export { continueFamily } from './continue-family.ts';
+export { scanAxisSegment, perpendicularSpeed } from './scan-axis-segment.ts';
+export { lyapunovGuess, retrogradeGuess } from './reference-seeds.ts';

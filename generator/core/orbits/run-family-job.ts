@@ -1,0 +1,130 @@
+// One job of the generator: find the seeds its rule asks for, continue every distinct family they start,
+// locate the stability changes and hand back catalog-ready bundles. Pure numerics, synchronous.
+import type { FamilyBundle, FamilyKind } from '../../../catalog-db/types.ts';
+import { lagrangePoints } from '../cr3bp/lagrange-points.ts';
+import type { AnalysisContext } from './analyse-orbit.ts';
+import { buildFamilyBundle } from './build-family-bundle.ts';
+import { continueFamily, memberFrom, type ContinuationRules } from './continue-family.ts';
+import { correctAtFixedX0, type CorrectedOrbit, type CorrectorOptions } from './correct-on-arc.ts';
+import type { FamilyJob, JobHooks, JobResult } from './family-job.ts';
+import type { FamilyMember } from './family-member.ts';
+import { parseSignature } from './lap-signature.ts';
+import { liesOnFamily } from './lies-on-family.ts';
+import { locateStabilityChanges } from './locate-stability-changes.ts';
+import { lyapunovGuess, retrogradeGuess } from './reference-seeds.ts';
+import { scanAxisSegment, type SeedCandidate } from './scan-axis-segment.ts';
+
+interface Seed {
+  corrected: CorrectedOrbit;
+  halfCrossings: number;
+  segment: string;
+}
+
+const familyLetter = (k: number): string => (k < 26 ? String.fromCharCode(97 + k) : `${familyLetter(Math.floor(k / 26) - 1)}${familyLetter(k % 26)}`);
+
+export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
+  const { system, seed: rule, limits, tolerance } = job;
+  const mu = system.mu;
+  const [L1, L2] = lagrangePoints(mu);
+  const context: AnalysisContext = { mu, xL1: L1.x, rtol: tolerance.rtol, atol: tolerance.atol };
+  const corrector: CorrectorOptions = {
+    rtol: tolerance.rtol, atol: tolerance.atol, maxTimeNd: limits.maxPeriodNd,
+    residualTolerance: Math.max(1e-11, 20 * tolerance.rtol), maxIterations: 12,
+  };
+  const primaryRadiusNd = system.primaryRadiusKm / system.lengthUnitKm;
+  const secondaryRadiusNd = system.secondaryRadiusKm / system.lengthUnitKm;
+  const laps = rule.kind === 'lap-signature' ? parseSignature(rule.signature, system.primaryLetter, system.secondaryLetter) : null;
+  if (rule.kind === 'lap-signature' && !laps) {
+    throw new RangeError(`signature must look like ${system.primaryLetter}2${system.secondaryLetter}1, got "${rule.signature}"`);
+  }
+  const rules: ContinuationRules = {
+    ...limits,
+    minStepNd: 1e-9,
+    maxIndexJump: 0.25,
+    maxPeriodJump: 0.02,
+    primaryRadiusNd,
+    secondaryRadiusNd,
+    laps,
+    needsNeckPassage: rule.kind === 'lap-signature',
+  };
+
+  const label = rule.kind === 'lap-signature' ? rule.signature : rule.kind === 'lyapunov' ? `${rule.point}-Lyapunov` : 'retrograde';
+  const kind: FamilyKind = rule.kind === 'lap-signature' ? 'cycler'
+    : rule.kind === 'lyapunov' ? (rule.point === 'L1' ? 'lyapunov-l1' : 'lyapunov-l2') : 'retrograde';
+
+  const seeds = (): Seed[] => {
+    if (rule.kind === 'lyapunov') {
+      const point = rule.point === 'L1' ? L1 : L2;
+      const [x0, vy0] = lyapunovGuess(mu, point.x, rule.amplitudeNd);
+      const corrected = correctAtFixedX0(mu, 1, x0, vy0, corrector) ?? correctAtFixedX0(mu, 1, x0, -vy0, corrector);
+      return corrected ? [{ corrected, halfCrossings: 1, segment: 'between' }] : [];
+    }
+    if (rule.kind === 'retrograde') {
+      const [x0, vy0] = retrogradeGuess(mu, rule.distanceNd);
+      const corrected = correctAtFixedX0(mu, 1, x0, vy0, corrector);
+      return corrected ? [{ corrected, halfCrossings: 1, segment: 'far-secondary' }] : [];
+    }
+    const candidates: SeedCandidate[] = [];
+    const scan = {
+      rtol: tolerance.rtol, atol: tolerance.atol, maxHalfTimeNd: limits.maxPeriodNd / 2, primaryRadiusNd,
+      secondaryRadiusNd, xL1: L1.x, reachNd: 1.2,
+    };
+    for (const jacobi of rule.jacobiValues) {
+      for (const segment of rule.segments) {
+        for (const direction of rule.directions) {
+          if (hooks.shouldStop?.()) return [];
+          candidates.push(...scanAxisSegment(mu, jacobi, segment, direction, rule.maxHalfCrossings, rule.gridPoints, scan));
+        }
+      }
+    }
+    return candidates.flatMap((c) => {
+      const corrected = correctAtFixedX0(mu, c.halfCrossings, c.x0, c.vy0, corrector);
+      return corrected ? [{ corrected, halfCrossings: c.halfCrossings, segment: c.segment }] : [];
+    });
+  };
+
+  const bundles: FamilyBundle[] = [];
+  const continued: FamilyMember[][] = [];
+  let interrupted = false;
+  for (const seed of seeds()) {
+    if (hooks.shouldStop?.()) {
+      interrupted = true;
+      break;
+    }
+    let start: FamilyMember;
+    try {
+      start = memberFrom(context, seed.corrected, 0);
+    } catch {
+      continue;
+    }
+    const a = start.analysis;
+    const footprint = { jacobi: a.jacobi, x0: start.x0, xHalf: start.xHalf, periodNd: a.periodNd };
+    if (continued.some((members) => liesOnFamily(footprint, members))) continue;
+    if (laps && (a.laps.primaryLaps !== laps.primaryLaps || a.laps.secondaryLaps !== laps.secondaryLaps || a.l1Passages === 0)) continue;
+    if (a.primaryMinDistanceNd < primaryRadiusNd || a.secondaryMinDistanceNd < secondaryRadiusNd) continue;
+
+    const letter = familyLetter(continued.length);
+    const familyLabel = `${label}/${letter}`;
+    const progress = (members: number) => hooks.onProgress?.({
+      jobKey: job.key, familyLabel, familiesDone: continued.length, members, maxMembers: limits.maxMembers,
+    });
+    progress(1);
+    const result = continueFamily(context, seed.halfCrossings, start, rules, corrector, {
+      onMember: progress,
+      shouldStop: hooks.shouldStop,
+    });
+    continued.push(result.members);
+    const stopped = result.endReasonStart === 'interrupted' || result.endReasonEnd === 'interrupted';
+    const map = stopped
+      ? { members: result.members, changes: [], windows: [] }
+      : locateStabilityChanges(context, seed.halfCrossings, result.members, job.indexTolerance, corrector);
+    bundles.push(buildFamilyBundle(system, {
+      id: `${system.id}/${label}/${letter}`, jobKey: job.key, name: job.name, kind, signature: label, seedSegment: seed.segment,
+    }, map, { start: result.endReasonStart, end: result.endReasonEnd }));
+    if (stopped) {
+      interrupted = true;
+      break;
+    }
+  }
+  return { bundles, interrupted };
+}

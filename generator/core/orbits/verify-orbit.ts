@@ -1,0 +1,16 @@
+// Re-integrates a stored orbit over one period: how far it is from closing and from keeping C.
+import { jacobiConstant } from '../cr3bp/jacobi-constant.ts';
+import { propagate } from '../propagation/propagate.ts';
+
+export interface OrbitCheck {
+  closureError: number;
+  jacobiDrift: number;
+}
+
+export function verifyOrbit(mu: number, state0: readonly number[], periodNd: number, tolerance: { rtol: number; atol: number }): OrbitCheck {
+  const end = propagate(mu, state0, periodNd, tolerance).state;
+  return {
+    closureError: Math.hypot(...Array.from(end, (v, i) => v - state0[i])),
+    jacobiDrift: Math.abs(jacobiConstant(mu, end) - jacobiConstant(mu, state0)),
+  };
+}
