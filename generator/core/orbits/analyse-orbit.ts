@@ -2,7 +2,7 @@
 // period with the 6×6 STM and the section and close-approach events.
 import { jacobiConstant } from '../cr3bp/jacobi-constant.ts';
 import { closestApproach } from '../events/closest-approach.ts';
-import type { EventSpec } from '../events/event-spec.ts';
+import type { EventHit, EventSpec } from '../events/event-spec.ts';
 import { propagate } from '../propagation/propagate.ts';
 import { countLaps, type AxisCrossing, type LapCounts } from './lap-signature.ts';
 import { neckHalfWidth } from './neck-half-width.ts';
@@ -42,6 +42,62 @@ function eventsFor(mu: number, xL1: number, neckHalfWidthNd: number): EventSpec[
   ];
 }
 
+interface EventSummary {
+  laps: LapCounts;
+  l1Passages: number;
+  primaryMin: number;
+  secondaryMin: number;
+  farthest: number;
+}
+
+/** Laps, neck passages and extreme distances from the events of one full period. */
+function summariseEvents(mu: number, x0: number, vy0: number, periodNd: number, events: readonly EventHit[]): EventSummary {
+  // Crossings strictly inside the period; the start point (also a crossing) is added once by hand.
+  const edge = 1e-6 * periodNd; // events this close to either end are the end points themselves
+  const crossings: AxisCrossing[] = [{ x: x0, vy: vy0 }];
+  const summary = {
+    l1Passages: 0,
+    primaryMin: Math.abs(x0 + mu),
+    secondaryMin: Math.abs(x0 - 1 + mu),
+    farthest: Math.abs(x0),
+  };
+  for (const e of events) {
+    if (e.tNd <= edge || e.tNd >= periodNd - edge) continue;
+    const s = e.state;
+    switch (e.label) {
+      case 'y=0': crossings.push({ x: s[0], vy: s[4] }); break;
+      case 'neck': summary.l1Passages++; break;
+      case 'primary': summary.primaryMin = Math.min(summary.primaryMin, Math.hypot(s[0] + mu, s[1], s[2])); break;
+      case 'secondary': summary.secondaryMin = Math.min(summary.secondaryMin, Math.hypot(s[0] - 1 + mu, s[1], s[2])); break;
+      case 'farthest': summary.farthest = Math.max(summary.farthest, Math.hypot(s[0], s[1], s[2])); break;
+    }
+  }
+  return { ...summary, laps: countLaps(mu, crossings) };
+}
+
+/**
+ * Lap counts and neck passages only, from half a period without the STM: a cheap screen before a seed is
+ * corrected. By the mirror theorem the second half repeats the first half's crossings mirrored in y,
+ * which keep their x and ẏ, so the half-period events count twice and the T/2 crossing once.
+ */
+export function screenOrbit(context: AnalysisContext, x0: number, vy0: number, periodNd: number): { laps: LapCounts; l1Passages: number } {
+  const { mu, xL1 } = context;
+  const state0 = [x0, 0, 0, 0, vy0, 0];
+  const events = eventsFor(mu, xL1, neckHalfWidth(mu, xL1, jacobiConstant(mu, state0)));
+  const halfNd = periodNd / 2;
+  const run = propagate(mu, state0, halfNd, { rtol: context.rtol, atol: context.atol, events });
+  const half = summariseEvents(mu, x0, vy0, halfNd, run.events);
+  const turn = countLaps(mu, [{ x: run.state[0], vy: run.state[4] }]);
+  const start = countLaps(mu, [{ x: x0, vy: vy0 }]);
+  return {
+    laps: {
+      primaryLaps: 2 * half.laps.primaryLaps - start.primaryLaps + turn.primaryLaps,
+      secondaryLaps: 2 * half.laps.secondaryLaps - start.secondaryLaps + turn.secondaryLaps,
+    },
+    l1Passages: 2 * half.l1Passages,
+  };
+}
+
 export function analyseOrbit(context: AnalysisContext, x0: number, vy0: number, periodNd: number): OrbitAnalysis {
   const { mu, xL1 } = context;
   const state0: OrbitAnalysis['state0'] = [x0, 0, 0, 0, vy0, 0];
@@ -49,29 +105,9 @@ export function analyseOrbit(context: AnalysisContext, x0: number, vy0: number, 
   const events = eventsFor(mu, xL1, neckHalfWidth(mu, xL1, jacobi));
   const run = propagate(mu, state0, periodNd, { rtol: context.rtol, atol: context.atol, stm: true, events });
   const end = run.state;
-  const closureError = Math.hypot(...Array.from(end, (v, i) => v - state0[i]));
-  const jacobiDrift = Math.abs(jacobiConstant(mu, end) - jacobi);
   const monodromy = run.stm!;
   const indices = stabilityIndices(monodromy);
-
-  // Crossings strictly inside the period; the start point (also a crossing) is added once by hand.
-  const edge = 1e-9 * periodNd;
-  const inside = run.events.filter((e) => e.tNd > edge && e.tNd < periodNd - edge);
-  const crossings: AxisCrossing[] = [{ x: x0, vy: vy0 }];
-  let l1Passages = 0;
-  let primaryMin = Math.hypot(x0 + mu, 0);
-  let secondaryMin = Math.abs(x0 - 1 + mu);
-  let farthest = Math.abs(x0);
-  for (const e of inside) {
-    const s = e.state;
-    switch (e.label) {
-      case 'y=0': crossings.push({ x: s[0], vy: s[4] }); break;
-      case 'neck': l1Passages++; break;
-      case 'primary': primaryMin = Math.min(primaryMin, Math.hypot(s[0] + mu, s[1], s[2])); break;
-      case 'secondary': secondaryMin = Math.min(secondaryMin, Math.hypot(s[0] - 1 + mu, s[1], s[2])); break;
-      case 'farthest': farthest = Math.max(farthest, Math.hypot(s[0], s[1], s[2])); break;
-    }
-  }
+  const summary = summariseEvents(mu, x0, vy0, periodNd, run.events);
   return {
     state0,
     periodNd,
@@ -80,12 +116,12 @@ export function analyseOrbit(context: AnalysisContext, x0: number, vy0: number, 
     stabilityIndex: indices.inPlane,
     verticalStabilityIndex: indices.vertical,
     eigenvalues: [...eigenvaluePair(indices.inPlane), ...eigenvaluePair(indices.vertical)],
-    primaryMinDistanceNd: primaryMin,
-    secondaryMinDistanceNd: secondaryMin,
-    maxDistanceNd: farthest,
-    l1Passages,
-    laps: countLaps(mu, crossings),
-    closureError,
-    jacobiDrift,
+    primaryMinDistanceNd: summary.primaryMin,
+    secondaryMinDistanceNd: summary.secondaryMin,
+    maxDistanceNd: summary.farthest,
+    l1Passages: summary.l1Passages,
+    laps: summary.laps,
+    closureError: Math.hypot(...Array.from(end, (v, i) => v - state0[i])),
+    jacobiDrift: Math.abs(jacobiConstant(mu, end) - jacobi),
   };
 }

@@ -2,7 +2,7 @@
 // locate the stability changes and hand back catalog-ready bundles. Pure numerics, synchronous.
 import type { FamilyBundle, FamilyKind } from '../../../catalog-db/types.ts';
 import { lagrangePoints } from '../cr3bp/lagrange-points.ts';
-import type { AnalysisContext } from './analyse-orbit.ts';
+import { screenOrbit, type AnalysisContext } from './analyse-orbit.ts';
 import { buildFamilyBundle } from './build-family-bundle.ts';
 import { continueFamily, memberFrom, type ContinuationRules } from './continue-family.ts';
 import { correctAtFixedX0, type CorrectedOrbit, type CorrectorOptions } from './correct-on-arc.ts';
@@ -65,8 +65,10 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
       return corrected ? [{ corrected, halfCrossings: 1, segment: 'far-secondary' }] : [];
     }
     const candidates: SeedCandidate[] = [];
+    // Scan and screen at a loose tolerance: only signs and lap counts are needed; Newton polishes later.
+    const loose = { rtol: Math.max(tolerance.rtol, 1e-10), atol: Math.max(tolerance.atol, 1e-10) };
     const scan = {
-      rtol: tolerance.rtol, atol: tolerance.atol, maxHalfTimeNd: limits.maxPeriodNd / 2, primaryRadiusNd,
+      ...loose, maxHalfTimeNd: limits.maxPeriodNd / 2, primaryRadiusNd,
       secondaryRadiusNd, xL1: L1.x, reachNd: 1.2,
     };
     for (const jacobi of rule.jacobiValues) {
@@ -78,6 +80,10 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
       }
     }
     return candidates.flatMap((c) => {
+      const screen = screenOrbit(context, c.x0, c.vy0, 2 * c.tHalfNd);
+      if (screen.l1Passages === 0 || screen.laps.primaryLaps !== laps!.primaryLaps || screen.laps.secondaryLaps !== laps!.secondaryLaps) {
+        return [];
+      }
       const corrected = correctAtFixedX0(mu, c.halfCrossings, c.x0, c.vy0, corrector);
       return corrected ? [{ corrected, halfCrossings: c.halfCrossings, segment: c.segment }] : [];
     });

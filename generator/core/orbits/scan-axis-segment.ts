@@ -16,6 +16,7 @@ export interface SeedCandidate {
 }
 
 export interface ScanOptions {
+  /** Tolerance of the scan and of the root bracketing: loose, the roots are polished with the STM later. */
   rtol: number;
   atol: number;
   maxHalfTimeNd: number;
@@ -95,14 +96,14 @@ export function scanAxisSegment(
       };
       let x0: number;
       try {
-        x0 = findRootBrent(vxAt, xs[i], xs[i + 1], fa, fb, 1e-15, 1e-13);
+        x0 = findRootBrent(vxAt, xs[i], xs[i + 1], fa, fb, 1e-13, 100 * o.rtol);
       } catch {
         continue;
       }
       const vy0 = direction * perpendicularSpeed(mu, x0, jacobi);
       const check = halfCrossingAt(mu, x0, vy0, k, o);
       // A jump of ẋ (the crossing structure changed inside the bracket) is no root.
-      if (!(Math.abs(check.vx) < 1e-8)) continue;
+      if (!(Math.abs(check.vx) < 1e-4)) continue;
       // A root that already closed at an earlier crossing is a multiple cover of a shorter orbit.
       if (check.earlier.some((vx) => Math.abs(vx) < 1e-6)) continue;
       found.push({ x0, vy0, halfCrossings: k, tHalfNd: check.t, jacobi, segment });
