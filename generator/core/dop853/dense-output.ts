@@ -1,4 +1,5 @@
 // 7th-order continuous extension of DOP853 (Hairer, Nørsett & Wanner 1993, §II.6; dop853.f CONTD8).
+// Like attempt-step.ts, reads and writes the workspace's single buffer at fixed offsets, for speed.
 import * as K from './coefficients.ts';
 
 // Copied into module constants: property loads from the namespace object are slow in some loaders.
@@ -12,7 +13,7 @@ const {
   D713, D714, D715, D716, A1410, A1411, A1412, A1413, A1511, A1512,
   A1513, A1514, A1613, A1614, A1615,
 } = K;
-import type { Dop853Workspace, Rhs } from './workspace.ts';
+import { SLOT_CONT, SLOT_K1, SLOT_STAGE, SLOT_Y, SLOT_Y_NEW, type Dop853Workspace, type Rhs } from './workspace.ts';
 
 /**
  * After an accepted step from (t, ws.y) to (t + h, ws.yNew), with ws.k13 = f(t + h, yNew):
@@ -20,43 +21,51 @@ import type { Dop853Workspace, Rhs } from './workspace.ts';
  */
 export function prepareDenseOutput(rhs: Rhs, ws: Dop853Workspace, t: number, h: number): void {
   const n = ws.n;
-  const { y, yNew, yStage: s, cont, k1, k6, k7, k8, k9, k10, k11, k12, k13, k14, k15, k16 } = ws;
+  const b = ws.buffer;
+  const s = ws.yStage;
+  const oY = SLOT_Y * n, oNew = SLOT_Y_NEW * n, oS = SLOT_STAGE * n, oC = SLOT_CONT * n;
+  const o1 = SLOT_K1 * n, o6 = o1 + 5 * n, o7 = o6 + n, o8 = o7 + n, o9 = o8 + n, o10 = o9 + n;
+  const o11 = o10 + n, o12 = o11 + n, o13 = o12 + n, o14 = o13 + n, o15 = o14 + n, o16 = o15 + n;
   let i = 0;
   for (i = 0; i < n; i++) {
-    s[i] = y[i] + h * (A141 * k1[i] + A147 * k7[i] + A148 * k8[i] + A149 * k9[i] + A1410 * k10[i]
-      + A1411 * k11[i] + A1412 * k12[i] + A1413 * k13[i]);
+    b[oS + i] = b[oY + i] + h * (A141 * b[o1 + i] + A147 * b[o7 + i] + A148 * b[o8 + i] + A149 * b[o9 + i]
+      + A1410 * b[o10 + i] + A1411 * b[o11 + i] + A1412 * b[o12 + i] + A1413 * b[o13 + i]);
   }
-  rhs(t + C14 * h, s, k14);
+  rhs(t + C14 * h, s, ws.k14);
   for (i = 0; i < n; i++) {
-    s[i] = y[i] + h * (A151 * k1[i] + A156 * k6[i] + A157 * k7[i] + A158 * k8[i] + A1511 * k11[i]
-      + A1512 * k12[i] + A1513 * k13[i] + A1514 * k14[i]);
+    b[oS + i] = b[oY + i] + h * (A151 * b[o1 + i] + A156 * b[o6 + i] + A157 * b[o7 + i] + A158 * b[o8 + i]
+      + A1511 * b[o11 + i] + A1512 * b[o12 + i] + A1513 * b[o13 + i] + A1514 * b[o14 + i]);
   }
-  rhs(t + C15 * h, s, k15);
+  rhs(t + C15 * h, s, ws.k15);
   for (i = 0; i < n; i++) {
-    s[i] = y[i] + h * (A161 * k1[i] + A166 * k6[i] + A167 * k7[i] + A168 * k8[i] + A169 * k9[i]
-      + A1613 * k13[i] + A1614 * k14[i] + A1615 * k15[i]);
+    b[oS + i] = b[oY + i] + h * (A161 * b[o1 + i] + A166 * b[o6 + i] + A167 * b[o7 + i] + A168 * b[o8 + i]
+      + A169 * b[o9 + i] + A1613 * b[o13 + i] + A1614 * b[o14 + i] + A1615 * b[o15 + i]);
   }
-  rhs(t + C16 * h, s, k16);
+  rhs(t + C16 * h, s, ws.k16);
 
   for (i = 0; i < n; i++) {
-    const yDiff = yNew[i] - y[i];
-    const bSpline = h * k1[i] - yDiff;
-    cont[i] = y[i];
-    cont[n + i] = yDiff;
-    cont[2 * n + i] = bSpline;
-    cont[3 * n + i] = yDiff - h * k13[i] - bSpline;
-    cont[4 * n + i] = h * (D41 * k1[i] + D46 * k6[i] + D47 * k7[i] + D48 * k8[i] + D49 * k9[i]
-      + D410 * k10[i] + D411 * k11[i] + D412 * k12[i] + D413 * k13[i] + D414 * k14[i]
-      + D415 * k15[i] + D416 * k16[i]);
-    cont[5 * n + i] = h * (D51 * k1[i] + D56 * k6[i] + D57 * k7[i] + D58 * k8[i] + D59 * k9[i]
-      + D510 * k10[i] + D511 * k11[i] + D512 * k12[i] + D513 * k13[i] + D514 * k14[i]
-      + D515 * k15[i] + D516 * k16[i]);
-    cont[6 * n + i] = h * (D61 * k1[i] + D66 * k6[i] + D67 * k7[i] + D68 * k8[i] + D69 * k9[i]
-      + D610 * k10[i] + D611 * k11[i] + D612 * k12[i] + D613 * k13[i] + D614 * k14[i]
-      + D615 * k15[i] + D616 * k16[i]);
-    cont[7 * n + i] = h * (D71 * k1[i] + D76 * k6[i] + D77 * k7[i] + D78 * k8[i] + D79 * k9[i]
-      + D710 * k10[i] + D711 * k11[i] + D712 * k12[i] + D713 * k13[i] + D714 * k14[i]
-      + D715 * k15[i] + D716 * k16[i]);
+    const yDiff = b[oNew + i] - b[oY + i];
+    const bSpline = h * b[o1 + i] - yDiff;
+    b[oC + i] = b[oY + i];
+    b[oC + n + i] = yDiff;
+    b[oC + 2 * n + i] = bSpline;
+    b[oC + 3 * n + i] = yDiff - h * b[o13 + i] - bSpline;
+    b[oC + 4 * n + i] = h * (D41 * b[o1 + i] + D46 * b[o6 + i] + D47 * b[o7 + i] + D48 * b[o8 + i]
+      + D49 * b[o9 + i]
+      + D410 * b[o10 + i] + D411 * b[o11 + i] + D412 * b[o12 + i] + D413 * b[o13 + i] + D414 * b[o14 + i]
+      + D415 * b[o15 + i] + D416 * b[o16 + i]);
+    b[oC + 5 * n + i] = h * (D51 * b[o1 + i] + D56 * b[o6 + i] + D57 * b[o7 + i] + D58 * b[o8 + i]
+      + D59 * b[o9 + i]
+      + D510 * b[o10 + i] + D511 * b[o11 + i] + D512 * b[o12 + i] + D513 * b[o13 + i] + D514 * b[o14 + i]
+      + D515 * b[o15 + i] + D516 * b[o16 + i]);
+    b[oC + 6 * n + i] = h * (D61 * b[o1 + i] + D66 * b[o6 + i] + D67 * b[o7 + i] + D68 * b[o8 + i]
+      + D69 * b[o9 + i]
+      + D610 * b[o10 + i] + D611 * b[o11 + i] + D612 * b[o12 + i] + D613 * b[o13 + i] + D614 * b[o14 + i]
+      + D615 * b[o15 + i] + D616 * b[o16 + i]);
+    b[oC + 7 * n + i] = h * (D71 * b[o1 + i] + D76 * b[o6 + i] + D77 * b[o7 + i] + D78 * b[o8 + i]
+      + D79 * b[o9 + i]
+      + D710 * b[o10 + i] + D711 * b[o11 + i] + D712 * b[o12 + i] + D713 * b[o13 + i] + D714 * b[o14 + i]
+      + D715 * b[o15 + i] + D716 * b[o16 + i]);
   }
   ws.denseT = t;
   ws.denseH = h;

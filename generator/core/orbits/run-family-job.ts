@@ -12,7 +12,8 @@ import { parseSignature } from './lap-signature.ts';
 import { liesOnFamily } from './lies-on-family.ts';
 import { locateStabilityChanges } from './locate-stability-changes.ts';
 import { lyapunovGuess, retrogradeGuess } from './reference-seeds.ts';
-import { scanAxisSegment, type SeedCandidate } from './scan-axis-segment.ts';
+import { cachedScan } from './cached-scan.ts';
+import type { SeedCandidate } from './scan-axis-segment.ts';
 
 interface Seed {
   corrected: CorrectedOrbit;
@@ -75,7 +76,7 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
       for (const segment of rule.segments) {
         for (const direction of rule.directions) {
           if (hooks.shouldStop?.()) return [];
-          candidates.push(...scanAxisSegment(mu, jacobi, segment, direction, rule.maxHalfCrossings, rule.gridPoints, scan));
+          candidates.push(...cachedScan(mu, jacobi, segment, direction, rule.maxHalfCrossings, rule.gridPoints, scan));
         }
       }
     }
