@@ -98,10 +98,10 @@ function march(
         next = null; // the full-period propagation failed (collision inside a body's centre, step limit)
       }
     }
-    const smaller = step * 0.5;
-    if (!next || (tooFar(current, next, rules) && smaller >= rules.minStepNd)) {
-      if (smaller < rules.minStepNd) return { members, end: 'no-convergence' };
-      step = smaller;
+    // Indices and period change continuously along a family: a jump that no step size removes is a breakdown.
+    if (!next || tooFar(current, next, rules)) {
+      step *= 0.5;
+      if (step < rules.minStepNd) return { members, end: 'no-convergence' };
       continue;
     }
     const reason = endReasonOf(next, rules);

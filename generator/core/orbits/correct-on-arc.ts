@@ -16,6 +16,14 @@ export interface CorrectorOptions extends ShotOptions {
   maxIterations: number;
 }
 
+/** Newton step at round-off size: for violently unstable orbits the residual cannot fall further. */
+const STALL_STEP = 1e-13;
+
+function converged(residual: number, stepNorm: number, iteration: number, options: CorrectorOptions): boolean {
+  if (Math.abs(residual) < options.residualTolerance && stepNorm < 1e3 * options.residualTolerance) return true;
+  return iteration > 1 && stepNorm < STALL_STEP && Math.abs(residual) < 50 * options.residualTolerance;
+}
+
 export function correctOnArc(
   mu: number, halfCrossings: number, from: readonly [number, number], tangent: readonly [number, number],
   stepNd: number, options: CorrectorOptions,
@@ -32,9 +40,7 @@ export function correctOnArc(
     if (!Number.isFinite(det) || det === 0) return null;
     const dx = -(residual * tangent[1] - g1 * arc) / det;
     const dv = -(g0 * arc - residual * tangent[0]) / det;
-    if (Math.abs(residual) < options.residualTolerance && Math.hypot(dx, dv) < 1e3 * options.residualTolerance) {
-      return { x0, vy0, shot, iterations: iteration };
-    }
+    if (converged(residual, Math.hypot(dx, dv), iteration, options)) return { x0, vy0, shot, iterations: iteration };
     x0 += dx;
     vy0 += dv;
     if (!Number.isFinite(x0) || !Number.isFinite(vy0)) return null;
@@ -60,9 +66,7 @@ export function correctAtFixedX0(mu: number, halfCrossings: number, x0: number, 
     const residual = shot.state[2];
     const slope = crossingVxGradient(shot)[1];
     const dv = -residual / slope;
-    if (Math.abs(residual) < options.residualTolerance && Math.abs(dv) < 1e3 * options.residualTolerance) {
-      return { x0, vy0, shot, iterations: iteration };
-    }
+    if (converged(residual, Math.abs(dv), iteration, options)) return { x0, vy0, shot, iterations: iteration };
     vy0 += Math.max(-0.1, Math.min(0.1, dv)); // damped: a bad guess should not fly off to another family
     if (!Number.isFinite(vy0)) return null;
   }

@@ -23,6 +23,21 @@ interface Seed {
 
 const familyLetter = (k: number): string => (k < 26 ? String.fromCharCode(97 + k) : `${familyLetter(Math.floor(k / 26) - 1)}${familyLetter(k % 26)}`);
 
+/** Distance from the nearer primary: the farther a perpendicular start is, the better conditioned its shot. */
+function clearance(mu: number, x: number): number {
+  return Math.min(Math.abs(x + mu), Math.abs(x - 1 + mu));
+}
+
+/**
+ * A symmetric orbit has two perpendicular crossings; the family is continued from the one farther from the
+ * primaries, where the half-period shot is least sensitive (the other half is its mirror image).
+ */
+function betterConditionedStart(mu: number, halfCrossings: number, orbit: CorrectedOrbit, corrector: CorrectorOptions): CorrectedOrbit | null {
+  const xHalf = orbit.shot.state[0];
+  if (clearance(mu, xHalf) <= clearance(mu, orbit.x0)) return orbit;
+  return correctAtFixedX0(mu, halfCrossings, xHalf, orbit.shot.state[3], corrector);
+}
+
 export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
   const { system, seed: rule, limits, tolerance } = job;
   const mu = system.mu;
@@ -86,7 +101,8 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
         return [];
       }
       const corrected = correctAtFixedX0(mu, c.halfCrossings, c.x0, c.vy0, corrector);
-      return corrected ? [{ corrected, halfCrossings: c.halfCrossings, segment: c.segment }] : [];
+      const start = corrected && betterConditionedStart(mu, c.halfCrossings, corrected, corrector);
+      return start ? [{ corrected: start, halfCrossings: c.halfCrossings, segment: c.segment }] : [];
     });
   };
 
