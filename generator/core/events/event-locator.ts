@@ -24,6 +24,8 @@ export class EventLocator implements StepObserver {
   private readonly stateDim: number;
   private readonly scratchVector: Float64Array;
   private readonly scratchState = new Float64Array(6);
+  /** Separate from scratchState: the root search must not overwrite the step-end state other events read. */
+  private readonly searchState = new Float64Array(6);
 
   constructor(private readonly specs: readonly EventSpec[], private readonly planar: boolean, n: number) {
     this.previousG = new Float64Array(specs.length);
@@ -80,7 +82,7 @@ export class EventLocator implements StepObserver {
 
   private locate(ws: Dop853Workspace, spec: EventSpec, tOld: number, tNew: number, g0: number, g1: number): number {
     const v = this.scratchVector;
-    const s = this.scratchState;
+    const s = this.searchState;
     const dim = this.stateDim;
     const planar = this.planar;
     const gAt = (t: number): number => {
