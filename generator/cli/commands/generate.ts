@@ -1,0 +1,111 @@
+// `cycler-atlas generate [CONFIG] --db FILE [--workers N] [--shard k/n]`, or one family without a
+// config: `cycler-atlas generate --system earth-moon --signature E2M1 --db FILE`.
+// Exit codes: 0 done, 1 some jobs failed, 2 bad arguments or config, 130 interrupted (Ctrl-C).
+import { Command } from 'commander';
+import { ConfigError } from '../../config/validate-config.ts';
+import { formatConfigPath } from '../../config/config-path.ts';
+import { loadConfig, type LoadedConfig } from '../../config/load-config.ts';
+import { SINGLE_FAMILY_OPTION_OF_PATH, singleFamilyConfig } from '../../config/single-family-config.ts';
+import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
+import { parseIntegerOption, parseNumberListOption, parseShardOption, UsageError } from '../../run/command-line-values.ts';
+import { generateFromConfig, type GenerateSummary } from '../../run/generate-catalog.ts';
+import { INTERRUPTED_EXIT_CODE } from '../../run/interrupt-handler.ts';
+
+export const DEFAULT_CONFIG_PATH = 'catalogs/demo.yaml';
+export const DEFAULT_DB_PATH = 'catalog-db/demo.sqlite';
+const PROGRESS_MODES = ['auto', 'bars', 'lines'] as const;
+
+interface GenerateFlags {
+  db: string;
+  workers?: string;
+  shard?: string;
+  system?: string;
+  signature?: string;
+  lyapunov?: string;
+  jacobi?: string;
+  maxMembers?: string;
+  progress: string;
+}
+
+export function createGenerateCommand(): Command {
+  const command = new Command('generate')
+    .description('compute the families of a catalog config (or one family) into a SQLite catalog; resumes where a run stopped')
+    .argument('[config]', `catalog config (YAML; default ${DEFAULT_CONFIG_PATH})`)
+    .option('--db <file>', 'catalog file to write (created if missing)', DEFAULT_DB_PATH)
+    .option('--workers <n>', 'worker threads (default: one per core)')
+    .option('--shard <k/n>', 'run only shard k of n (jobs whose index mod n is k-1)')
+    .option('--system <id>', 'one family without a config: system preset id, e.g. earth-moon')
+    .option('--signature <sig>', 'with --system: lap signature, e.g. E2M1')
+    .option('--lyapunov <point>', 'with --system: L1 or L2 Lyapunov family')
+    .option('--jacobi <list>', 'with --signature: Jacobi constants to scan at, comma-separated')
+    .option('--max-members <n>', 'with --system: member limit of the family')
+    .option('--progress <mode>', `progress display: ${PROGRESS_MODES.join(', ')}`, 'auto')
+    .action(async (configArg: string | undefined, flags: GenerateFlags) => {
+      try {
+        const summary = await generate(configArg, flags);
+        process.exitCode = summary.interrupted ? INTERRUPTED_EXIT_CODE : summary.jobsFailed.length > 0 ? 1 : 0;
+      } catch (error) {
+        failWith(command, error);
+      }
+    });
+  return exitWithUsageCode(command);
+}
+
+async function generate(configArg: string | undefined, flags: GenerateFlags): Promise<GenerateSummary> {
+  const workers = flags.workers === undefined ? undefined : parseIntegerOption('--workers', flags.workers, 1, 256);
+  const shard = flags.shard === undefined ? undefined : parseShardOption('--shard', flags.shard);
+  if (!(PROGRESS_MODES as readonly string[]).includes(flags.progress)) {
+    throw new UsageError(`--progress: "${flags.progress}" is not allowed (allowed: ${PROGRESS_MODES.join(', ')})`);
+  }
+  const single = flags.system !== undefined;
+  const loaded = single ? singleFamily(configArg, flags) : configFile(configArg, flags);
+  const summary = await generateFromConfig(loaded, {
+    dbPath: flags.db,
+    workers,
+    shard,
+    progress: flags.progress as (typeof PROGRESS_MODES)[number],
+    scenario: single ? 'if-missing' : 'set',
+  });
+  const failed = summary.jobsFailed.length;
+  console.log(
+    `run ${summary.runId}${summary.interrupted ? ' interrupted' : ''}: ${summary.jobsDone} job(s) done, ${summary.jobsSkipped} skipped (done before)` +
+      `${failed > 0 ? `, ${failed} failed` : ''}; ${summary.familiesWritten} families, ${summary.membersWritten} members written ` +
+      `to ${flags.db} in ${summary.seconds.toFixed(1)} s with ${summary.workers} worker(s)`,
+  );
+  if (summary.interrupted) console.log('interrupted: run the same command again to resume');
+  return summary;
+}
+
+function configFile(configArg: string | undefined, flags: GenerateFlags): LoadedConfig {
+  for (const option of ['signature', 'lyapunov', 'jacobi', 'maxMembers'] as const) {
+    if (flags[option] !== undefined) {
+      throw new UsageError(`--${option === 'maxMembers' ? 'max-members' : option}: only allowed with --system (one family without a config)`);
+    }
+  }
+  return loadConfig(configArg ?? DEFAULT_CONFIG_PATH);
+}
+
+function singleFamily(configArg: string | undefined, flags: GenerateFlags): LoadedConfig {
+  if (configArg !== undefined) throw new UsageError(`--system: not allowed together with a config file ("${configArg}"); give one or the other`);
+  if ((flags.signature === undefined) === (flags.lyapunov === undefined)) {
+    throw new UsageError('--system: needs exactly one of --signature (e.g. E2M1) or --lyapunov (L1 or L2)');
+  }
+  if (flags.jacobi !== undefined && flags.signature === undefined) throw new UsageError('--jacobi: only allowed with --signature');
+  try {
+    return singleFamilyConfig({
+      system: flags.system as string,
+      signature: flags.signature,
+      lyapunov: flags.lyapunov,
+      jacobi: flags.jacobi === undefined ? undefined : parseNumberListOption('--jacobi', flags.jacobi),
+      maxMembers: flags.maxMembers === undefined ? undefined : parseIntegerOption('--max-members', flags.maxMembers, 1, 100_000),
+    });
+  } catch (error) {
+    // Name the option rather than the generated config's field.
+    if (error instanceof ConfigError && error.issue) {
+      const path = formatConfigPath(error.issue.path);
+      const option = SINGLE_FAMILY_OPTION_OF_PATH.find(([pattern]) => pattern.test(path))?.[1];
+      if (option) throw new UsageError(`${option}: ${error.issue.message}`);
+    }
+    throw error;
+  }
+}

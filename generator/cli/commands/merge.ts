@@ -1,0 +1,31 @@
+// `cycler-atlas merge OUT IN...`: merges shard catalogs (from `generate --shard k/n`) into OUT
+// (created if missing). The rules for families present twice are catalog-db/merge-catalogs.ts's.
+import { existsSync } from 'node:fs';
+import { Command } from 'commander';
+import { mergeCatalogs } from '../../../catalog-db/merge-catalogs.ts';
+import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
+import { UsageError } from '../../run/command-line-values.ts';
+
+export function createMergeCommand(): Command {
+  const command = new Command('merge')
+    .description('merge shard catalogs into one catalog file')
+    .argument('<out>', 'catalog file to write (created if missing)')
+    .argument('<in...>', 'catalog files to merge into it')
+    .action((out: string, inputs: string[]) => {
+      try {
+        const missing = inputs.find((path) => !existsSync(path));
+        if (missing !== undefined) throw new UsageError(`IN: "${missing}" does not exist (a catalog file written by generate)`);
+        const report = mergeCatalogs(out, inputs);
+        for (const input of report.inputs) {
+          console.log(
+            `merged ${input.path}: ${input.familiesWritten} families written, ${input.familiesSkipped} kept from newer runs, ` +
+              `${input.runsAdded} runs added, ${input.jobsMerged} jobs`,
+          );
+        }
+        console.log(`wrote ${report.outPath}`);
+      } catch (error) {
+        failWith(command, error);
+      }
+    });
+  return exitWithUsageCode(command);
+}

@@ -1,0 +1,39 @@
+// Reads a catalog config file (YAML), validates it and keeps its text (hashed into the run row).
+import { readFileSync } from 'node:fs';
+import { basename } from 'node:path';
+import { parseDocument } from 'yaml';
+import type { CatalogConfig } from './config-schema.ts';
+import { ConfigError, validateConfig } from './validate-config.ts';
+
+export interface LoadedConfig {
+  config: CatalogConfig;
+  configPath: string;
+  /** The file's text exactly as read (its sha256 is the run's config hash). */
+  text: string;
+}
+
+export function loadConfig(configPath: string): LoadedConfig {
+  const label = basename(configPath);
+  let text: string;
+  try {
+    text = readFileSync(configPath, 'utf8');
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    const why = code === 'ENOENT' ? 'the file does not exist' : `cannot read the file (${code ?? String(error)})`;
+    throw new ConfigError(`config ${configPath}: ${why}`);
+  }
+  return { config: parseConfigText(text, label), configPath, text };
+}
+
+/** YAML text to a validated config; label names the source in messages. */
+export function parseConfigText(text: string, label: string): CatalogConfig {
+  const document = parseDocument(text, { uniqueKeys: true });
+  const error = document.errors[0];
+  if (error) {
+    const where = error.linePos?.[0] ? ` at line ${error.linePos[0].line}, column ${error.linePos[0].col}` : '';
+    // The library's message carries its own position and a code excerpt after the first line.
+    const detail = error.message.split('\n')[0]?.replace(/ at line \d+, column \d+:?$/, '');
+    throw new ConfigError(`config ${label}: YAML syntax error${where}: ${detail}`);
+  }
+  return validateConfig(document.toJS(), label);
+}

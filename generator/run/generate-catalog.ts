@@ -1,0 +1,180 @@
+// `generate`: runs the jobs of a catalog config on a worker pool and writes what they yield.
+// Provenance goes into a run row; finished jobs are skipped (resume); this shard's jobs only.
+import { openCatalogForRead, openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
+import type { CatalogWriter } from '../../catalog-db/types.ts';
+import { buildJobs, configSystems } from '../config/build-jobs.ts';
+import { loadConfig, type LoadedConfig } from '../config/load-config.ts';
+import type { FamilyJob } from '../core/orbits/family-job.ts';
+import { handleInterrupts } from './interrupt-handler.ts';
+import { createProgressBars } from './progress-bars.ts';
+import type { ProgressDisplay } from './progress-display.ts';
+import { createProgressLines } from './progress-lines.ts';
+import { generatorVersion, gitCommit, sha256Hex } from './run-provenance.ts';
+import { formatShard, selectShard, type Shard } from './shard.ts';
+import { createFamilyPool, defaultWorkerCount } from './worker-pool.ts';
+import { writeJobResult } from './write-job-result.ts';
+
+export interface GenerateOptions {
+  dbPath: string;
+  /** Worker threads; default one per core (never more than there are jobs to run). */
+  workers?: number;
+  shard?: Shard;
+  log?: (line: string) => void;
+  /** 'auto': bars on a terminal, lines otherwise. */
+  progress?: 'auto' | 'bars' | 'lines';
+  /** Install the Ctrl-C handler (default true; tests turn it off). */
+  handleSigint?: boolean;
+  /** 'set' (a config run) replaces the catalog's scenario; 'if-missing' (one family from the command line) keeps it. */
+  scenario?: 'set' | 'if-missing';
+}
+
+export interface GenerateSummary {
+  runId: number;
+  jobsInShard: number;
+  jobsSkipped: number; // already done (resume)
+  jobsDone: number; // finished in this run
+  jobsFailed: Array<{ key: string; message: string }>;
+  familiesWritten: number;
+  membersWritten: number;
+  interrupted: boolean;
+  seconds: number;
+  workers: number;
+  /** Wall-clock seconds of each job run here, from leaving the queue to being written. */
+  jobSeconds: Record<string, number>;
+}
+
+export async function generateCatalog(options: GenerateOptions & { configPath: string }): Promise<GenerateSummary> {
+  return generateFromConfig(loadConfig(options.configPath), options);
+}
+
+export async function generateFromConfig(loaded: LoadedConfig, options: GenerateOptions): Promise<GenerateSummary> {
+  const startMs = Date.now();
+  const log = options.log ?? ((line: string) => console.log(line));
+  const shard = options.shard ?? { k: 1, n: 1 };
+  const { config, configPath, text } = loaded;
+  const jobs = selectShard(buildJobs(config, configPath), shard);
+  const configHash = sha256Hex(text);
+
+  const writer = openCatalogForWrite(options.dbPath);
+  try {
+    for (const system of configSystems(config)) writer.upsertSystem(system);
+    const earlier = readEarlierState(options.dbPath);
+    const fromConfigFile = (options.scenario ?? 'set') === 'set';
+    if (fromConfigFile && earlier.latestConfigHash !== null && earlier.latestConfigHash !== configHash) {
+      log(`note: the config differs from the one of run ${earlier.latestRunId}; jobs done by earlier runs are kept, not redone`);
+    }
+    if (fromConfigFile || !earlier.hasScenario) {
+      writer.setScenario({ name: config.scenario.name, team: config.scenario.team, description: config.scenario.description });
+    }
+    const runId = writer.startRun({
+      generatorVersion: generatorVersion(),
+      gitCommit: gitCommit(),
+      configHash,
+      configPath,
+      scenarioName: config.scenario.name,
+      scenarioDescription: config.scenario.description,
+      rtol: config.tolerance.rtol,
+      atol: config.tolerance.atol,
+      shard: formatShard(shard),
+      startedAt: new Date().toISOString(),
+    });
+    const pending = jobs.filter((job) => !writer.jobDone(job.key));
+    const summary: GenerateSummary = {
+      runId,
+      jobsInShard: jobs.length,
+      jobsSkipped: jobs.length - pending.length,
+      jobsDone: 0,
+      jobsFailed: [],
+      familiesWritten: 0,
+      membersWritten: 0,
+      interrupted: false,
+      seconds: 0,
+      workers: 0,
+      jobSeconds: {},
+    };
+    log(
+      `run ${runId}: ${jobs.length} job(s) in shard ${formatShard(shard)}` +
+        (summary.jobsSkipped > 0 ? `, ${summary.jobsSkipped} already done (skipped)` : '') +
+        `, ${pending.length} to run`,
+    );
+    if (pending.length > 0) await runJobs(pending, writer, runId, options, log, summary);
+    // An interrupted run keeps finishedAt null (catalog-db/types.ts: null after an interruption).
+    if (!summary.interrupted) writer.finishRun(runId, new Date().toISOString());
+    summary.seconds = (Date.now() - startMs) / 1000;
+    return summary;
+  } finally {
+    writer.close();
+  }
+}
+
+async function runJobs(
+  pending: FamilyJob[],
+  writer: CatalogWriter,
+  runId: number,
+  options: GenerateOptions,
+  log: (line: string) => void,
+  summary: GenerateSummary,
+): Promise<void> {
+  const threads = Math.max(1, Math.min(options.workers ?? defaultWorkerCount(), pending.length));
+  summary.workers = threads;
+  const display = chooseDisplay(options.progress ?? 'auto', log);
+  display.begin(pending.length);
+  const pool = createFamilyPool(threads);
+  const removeHandler =
+    options.handleSigint === false
+      ? () => {}
+      : handleInterrupts(() => {
+          summary.interrupted = true;
+          pool.requestStop();
+        }, display.log);
+  try {
+    await Promise.all(
+      pending.map(async (job) => {
+        let jobStartMs = Date.now(); // reset when the job leaves the queue (its first progress message)
+        let started = false;
+        try {
+          const result = await pool.run(job, (progress) => {
+            if (!started) {
+              started = true;
+              jobStartMs = Date.now();
+            }
+            display.progress(job, progress);
+          });
+          if (result.interrupted) summary.interrupted = true;
+          const written = writeJobResult(writer, runId, job, result);
+          summary.familiesWritten += written.families;
+          summary.membersWritten += written.members;
+          if (written.done) summary.jobsDone += 1;
+          summary.jobSeconds[job.key] = (Date.now() - jobStartMs) / 1000;
+          const seconds = summary.jobSeconds[job.key]!.toFixed(1);
+          const what = written.families === 0 ? 'no family found' : `${written.families} famil${written.families === 1 ? 'y' : 'ies'}, ${written.members} members`;
+          display.jobEnded(job, `${written.done ? 'done' : 'interrupted'} ${job.key}: ${what} (${seconds} s)`);
+        } catch (error) {
+          const message = error instanceof Error ? error.message : String(error);
+          summary.jobsFailed.push({ key: job.key, message });
+          display.jobEnded(job, `failed ${job.key}: ${message.split('\n')[0]}`);
+        }
+      }),
+    );
+  } finally {
+    removeHandler();
+    display.end();
+    await pool.destroy();
+  }
+}
+
+function chooseDisplay(mode: 'auto' | 'bars' | 'lines', log: (line: string) => void): ProgressDisplay {
+  const bars = mode === 'bars' || (mode === 'auto' && process.stderr.isTTY === true);
+  return bars ? createProgressBars() : createProgressLines(log);
+}
+
+/** What the catalog already holds (the writer has created the file by now). */
+function readEarlierState(dbPath: string): { hasScenario: boolean; latestRunId: number | null; latestConfigHash: string | null } {
+  const reader = openCatalogForRead(dbPath);
+  try {
+    const latest = reader.runs()[0];
+    return { hasScenario: reader.scenario() !== null, latestRunId: latest?.id ?? null, latestConfigHash: latest?.configHash ?? null };
+  } finally {
+    reader.close();
+  }
+}

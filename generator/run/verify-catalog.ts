@@ -1,0 +1,67 @@
+// `verify`: re-integrates every stored orbit (or one family's) over its period, at a tolerance set by
+// the run that produced it, and lists those that miss the limits of verify-limits.ts.
+import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
+import type { RunRow } from '../../catalog-db/types.ts';
+import { verifyOrbit } from '../core/orbits/verify-orbit.ts';
+import { largestEigenvalueModulus, verifyLimitsFor, verifyToleranceFor, type VerifyLimits } from './verify-limits.ts';
+
+export interface OrbitVerdict {
+  orbitId: string;
+  closureError: number;
+  jacobiDrift: number;
+  largestEigenvalueModulus: number;
+  limits: VerifyLimits;
+}
+
+export interface VerifyReport {
+  orbitsChecked: number;
+  failures: OrbitVerdict[];
+  worstClosure: number;
+  worstDrift: number;
+  seconds: number;
+}
+
+export function verifyCatalog(dbPath: string, options: { familyId?: string; onProgress?: (done: number, total: number) => void } = {}): VerifyReport {
+  const startMs = Date.now();
+  const reader = openCatalogForRead(dbPath);
+  try {
+    const systems = new Map(reader.systems().map((s) => [s.id, s]));
+    const runs = new Map<number, RunRow>(reader.runs().map((r) => [r.id, r]));
+    const families = options.familyId === undefined ? reader.families() : [reader.family(options.familyId)];
+    if (families[0] === undefined) throw new RangeError(`family "${options.familyId}" is not in ${dbPath}`);
+    const total = families.reduce((sum, f) => sum + (f?.memberCount ?? 0), 0);
+    const report: VerifyReport = { orbitsChecked: 0, failures: [], worstClosure: 0, worstDrift: 0, seconds: 0 };
+    for (const family of families) {
+      if (family === undefined) continue;
+      const mu = systems.get(family.systemId)!.mu;
+      const run = runs.get(family.runId)!;
+      const tolerance = verifyToleranceFor(run);
+      for (const orbit of reader.orbits(family.id)) {
+        const lambda = largestEigenvalueModulus(orbit.eigenvalues);
+        const limits = verifyLimitsFor(run, lambda);
+        const check = safeVerify(mu, orbit.state0, orbit.period, tolerance);
+        report.orbitsChecked += 1;
+        report.worstClosure = Math.max(report.worstClosure, check.closureError);
+        report.worstDrift = Math.max(report.worstDrift, check.jacobiDrift);
+        // NaN (a failed integration) counts as a failure too.
+        if (!(check.closureError <= limits.closure && check.jacobiDrift <= limits.jacobiDrift)) {
+          report.failures.push({ orbitId: orbit.id, ...check, largestEigenvalueModulus: lambda, limits });
+        }
+        options.onProgress?.(report.orbitsChecked, total);
+      }
+    }
+    report.seconds = (Date.now() - startMs) / 1000;
+    return report;
+  } finally {
+    reader.close();
+  }
+}
+
+/** A propagation that throws (e.g. a collision on a corrupted state) is a failed check, not a crash. */
+function safeVerify(mu: number, state0: number[], periodNd: number, tolerance: { rtol: number; atol: number }) {
+  try {
+    return verifyOrbit(mu, state0, periodNd, tolerance);
+  } catch {
+    return { closureError: Number.NaN, jacobiDrift: Number.NaN };
+  }
+}
