@@ -51,21 +51,17 @@ export function prepareDenseOutput(rhs: Rhs, ws: Dop853Workspace, t: number, h: 
     b[oC + 2 * n + i] = bSpline;
     b[oC + 3 * n + i] = yDiff - h * b[o13 + i] - bSpline;
     b[oC + 4 * n + i] = h * (D41 * b[o1 + i] + D46 * b[o6 + i] + D47 * b[o7 + i] + D48 * b[o8 + i]
-      + D49 * b[o9 + i]
-      + D410 * b[o10 + i] + D411 * b[o11 + i] + D412 * b[o12 + i] + D413 * b[o13 + i] + D414 * b[o14 + i]
-      + D415 * b[o15 + i] + D416 * b[o16 + i]);
+      + D49 * b[o9 + i] + D410 * b[o10 + i] + D411 * b[o11 + i] + D412 * b[o12 + i] + D413 * b[o13 + i]
+      + D414 * b[o14 + i] + D415 * b[o15 + i] + D416 * b[o16 + i]);
     b[oC + 5 * n + i] = h * (D51 * b[o1 + i] + D56 * b[o6 + i] + D57 * b[o7 + i] + D58 * b[o8 + i]
-      + D59 * b[o9 + i]
-      + D510 * b[o10 + i] + D511 * b[o11 + i] + D512 * b[o12 + i] + D513 * b[o13 + i] + D514 * b[o14 + i]
-      + D515 * b[o15 + i] + D516 * b[o16 + i]);
+      + D59 * b[o9 + i] + D510 * b[o10 + i] + D511 * b[o11 + i] + D512 * b[o12 + i] + D513 * b[o13 + i]
+      + D514 * b[o14 + i] + D515 * b[o15 + i] + D516 * b[o16 + i]);
     b[oC + 6 * n + i] = h * (D61 * b[o1 + i] + D66 * b[o6 + i] + D67 * b[o7 + i] + D68 * b[o8 + i]
-      + D69 * b[o9 + i]
-      + D610 * b[o10 + i] + D611 * b[o11 + i] + D612 * b[o12 + i] + D613 * b[o13 + i] + D614 * b[o14 + i]
-      + D615 * b[o15 + i] + D616 * b[o16 + i]);
+      + D69 * b[o9 + i] + D610 * b[o10 + i] + D611 * b[o11 + i] + D612 * b[o12 + i] + D613 * b[o13 + i]
+      + D614 * b[o14 + i] + D615 * b[o15 + i] + D616 * b[o16 + i]);
     b[oC + 7 * n + i] = h * (D71 * b[o1 + i] + D76 * b[o6 + i] + D77 * b[o7 + i] + D78 * b[o8 + i]
-      + D79 * b[o9 + i]
-      + D710 * b[o10 + i] + D711 * b[o11 + i] + D712 * b[o12 + i] + D713 * b[o13 + i] + D714 * b[o14 + i]
-      + D715 * b[o15 + i] + D716 * b[o16 + i]);
+      + D79 * b[o9 + i] + D710 * b[o10 + i] + D711 * b[o11 + i] + D712 * b[o12 + i] + D713 * b[o13 + i]
+      + D714 * b[o14 + i] + D715 * b[o15 + i] + D716 * b[o16 + i]);
   }
   ws.denseT = t;
   ws.denseH = h;

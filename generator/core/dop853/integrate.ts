@@ -4,7 +4,7 @@ import { attemptStep } from './attempt-step.ts';
 import { evaluateDenseOutput, prepareDenseOutput } from './dense-output.ts';
 import { initialStepSize } from './initial-step.ts';
 import { IntegrationError } from './integration-error.ts';
-import type { Dop853Workspace, Rhs } from './workspace.ts';
+import { SLOT_K1, SLOT_Y, SLOT_Y_NEW, type Dop853Workspace, type Rhs } from './workspace.ts';
 
 export interface Dop853Options {
   rtol: number;
@@ -108,13 +108,12 @@ export function integrateDop853(
         prepareDenseOutput(rhs, ws, t, h);
         nfcn += 3;
       }
-      // Swap buffers instead of copying: yNew becomes y, f(t + h) becomes the next k1.
-      const yOld = ws.y;
-      ws.y = ws.yNew;
-      ws.yNew = yOld;
-      const kOld = ws.k1;
-      ws.k1 = ws.k13;
-      ws.k13 = kOld;
+      // yNew becomes y and f(t + h) the next k1 (FSAL). The vectors stay at fixed places in ws.buffer.
+      const buffer = ws.buffer;
+      for (let i = 0, oY = SLOT_Y * n, oNew = SLOT_Y_NEW * n, o1 = SLOT_K1 * n, o13 = o1 + 12 * n; i < n; i++) {
+        buffer[oY + i] = buffer[oNew + i];
+        buffer[o1 + i] = buffer[o13 + i];
+      }
       const tOld = t;
       t = tNew;
       if (observer) {
