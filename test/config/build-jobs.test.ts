@@ -23,7 +23,7 @@ describe('buildJobs(demo config)', () => {
       'earth-moon:E2M1', 'earth-moon:E2M2', 'earth-moon:E2M3',
       'earth-moon:E3M1', 'earth-moon:E3M2', 'earth-moon:E3M3',
       'earth-moon:L1-lyapunov', 'earth-moon:L2-lyapunov',
-      'pluto-charon:P1C1',
+      'pluto-charon:P3C1',
     ]);
     expect(jobs).toHaveLength(raw.families.length);
     expect(loadConfig(demoPath).config).toEqual(loaded.config); // same file, same jobs: keys do not drift
