@@ -9,6 +9,10 @@ export interface OrbitFootprint {
   periodNd: number;
 }
 
+export function footprintOf(member: FamilyMember): OrbitFootprint {
+  return { jacobi: member.analysis.jacobi, x0: member.x0, xHalf: member.xHalf, periodNd: member.analysis.periodNd };
+}
+
 export function liesOnFamily(seed: OrbitFootprint, members: readonly FamilyMember[], tolerance = 1e-4): boolean {
   for (let i = 0; i + 1 < members.length; i++) {
     const a = members[i], b = members[i + 1];

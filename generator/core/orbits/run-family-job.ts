@@ -9,7 +9,7 @@ import { correctAtFixedX0, type CorrectedOrbit, type CorrectorOptions } from './
 import type { FamilyJob, JobHooks, JobResult } from './family-job.ts';
 import type { FamilyMember } from './family-member.ts';
 import { parseSignature } from './lap-signature.ts';
-import { liesOnFamily } from './lies-on-family.ts';
+import { footprintOf, liesOnFamily } from './lies-on-family.ts';
 import { locateStabilityChanges } from './locate-stability-changes.ts';
 import { lyapunovGuess, retrogradeGuess } from './reference-seeds.ts';
 import { cachedScan } from './cached-scan.ts';
@@ -121,8 +121,8 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
       continue;
     }
     const a = start.analysis;
-    const footprint = { jacobi: a.jacobi, x0: start.x0, xHalf: start.xHalf, periodNd: a.periodNd };
-    if (continued.some((members) => liesOnFamily(footprint, members))) continue;
+    const isKnown = (m: FamilyMember) => continued.some((members) => liesOnFamily(footprintOf(m), members));
+    if (isKnown(start)) continue;
     if (laps && (a.laps.primaryLaps !== laps.primaryLaps || a.laps.secondaryLaps !== laps.secondaryLaps || a.l1Passages === 0)) continue;
     if (a.primaryMinDistanceNd < primaryRadiusNd || a.secondaryMinDistanceNd < secondaryRadiusNd) continue;
 
@@ -136,8 +136,11 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
       onMember: progress,
       shouldStop: hooks.shouldStop,
     });
-    continued.push(result.members);
     const stopped = result.endReasonStart === 'interrupted' || result.endReasonEnd === 'interrupted';
+    // A seed off the known members can still lead back onto a known family (it was found beyond that
+    // family's ends or between sparse members): then it is that family again.
+    if (!stopped && result.members.filter((m, i) => i % 4 === 0 && isKnown(m)).length >= 2) continue;
+    continued.push(result.members);
     const map = stopped
       ? { members: result.members, changes: [], windows: [] }
       : locateStabilityChanges(context, seed.halfCrossings, result.members, job.indexTolerance, corrector);
