@@ -8,27 +8,11 @@ import { mkdirSync, readFileSync, readdirSync, renameSync, writeFileSync } from 
 import { tmpdir } from 'node:os';
 import { dirname, join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { findSystemPreset, massRatioOf, timeUnitSecondsOf } from '../../../generator/core/cr3bp/index.ts';
+import { resolveSystem } from '../../../generator/config/resolve-system.ts';
 import type { FamilyJob, JobResult, SystemSpec } from '../../../generator/core/orbits/family-job.ts';
 import { runFamilyJob } from '../../../generator/core/orbits/run-family-job.ts';
 
-const preset = findSystemPreset('earth-moon');
-
-export const EARTH_MOON: SystemSpec = {
-  id: preset.id,
-  name: preset.name,
-  mu: massRatioOf(preset),
-  lengthUnitKm: preset.lengthUnitKm,
-  timeUnitS: timeUnitSecondsOf(preset),
-  primaryName: preset.primaryName,
-  secondaryName: preset.secondaryName,
-  primaryLetter: preset.primaryLetter,
-  secondaryLetter: preset.secondaryLetter,
-  primaryRadiusKm: preset.primaryRadiusKm,
-  secondaryRadiusKm: preset.secondaryRadiusKm,
-  synodicPeriodDays: preset.synodicPeriodDays,
-  source: preset.source,
-};
+export const EARTH_MOON: SystemSpec = resolveSystem({ preset: 'earth-moon' });
 
 const LIMITS = {
   jacobiMin: 2.9, jacobiMax: 3.3, maxPeriodNd: 40, unstableStop: { indexAbove: 1e5, members: 40 },
