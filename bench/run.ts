@@ -12,6 +12,7 @@ const BENCHES: BenchModule[] = [
   { name: 'core-integrator', load: () => import('./core-integrator.ts') },
   { name: 'generator-demo', load: () => import('./generator-demo.ts') },
   { name: 'generator-numerics', load: () => import('./generator-numerics.ts') },
+  { name: 'site-build', load: () => import('./site-build.ts') },
 ];
 
 const filters = process.argv.slice(2).filter((a) => a !== '--');

@@ -1,0 +1,96 @@
+// Our chart look: two member classes told apart by colour AND shape (blue circles / orange triangles,
+// readable with the common colour-vision deficiencies), bifurcations in near-black diamonds and squares.
+import type { ChartMember } from './chart-input.ts';
+
+export const CHART_WIDTH = 520;
+export const CHART_HEIGHT = 280;
+
+export const CLASS_STABLE = 'stable';
+export const CLASS_UNSTABLE = 'unstable';
+export const CLASS_TANGENT = 'tangent bifurcation (ν = +1)';
+export const CLASS_DOUBLING = 'period-doubling bifurcation (ν = −1)';
+
+const classDomain = [CLASS_STABLE, CLASS_UNSTABLE, CLASS_TANGENT, CLASS_DOUBLING];
+
+export const classColor = {
+  field: 'cls',
+  type: 'nominal',
+  title: null,
+  scale: { domain: classDomain, range: ['#1f5fa8', '#c0661c', '#26262b', '#26262b'] },
+  legend: { orient: 'bottom', direction: 'horizontal', columns: 2, labelLimit: 320, symbolStrokeWidth: 1.5 },
+} as const;
+
+export const classShape = {
+  field: 'cls',
+  type: 'nominal',
+  title: null,
+  scale: { domain: classDomain, range: ['circle', 'triangle-up', 'diamond', 'square'] },
+} as const;
+
+export const BAND_FILL = '#dde8d3'; // |ν| < 1
+export const WINDOW_FILL = '#a9c8ea'; // stable windows
+export const FAMILY_LINE = '#8d949c';
+
+export const chartConfig = {
+  // No per-point ARIA labels (they tripled the SVG); each chart carries its own text alternative instead.
+  aria: false,
+  font: "system-ui, 'DejaVu Sans', 'Liberation Sans', Arial, sans-serif",
+  background: '#ffffff',
+  view: { stroke: '#c9c5bb' },
+  axis: { labelColor: '#3c4652', titleColor: '#1b2129', gridColor: '#ecebe6', domainColor: '#8d949c', tickColor: '#8d949c', titleFontWeight: 600 },
+  legend: { labelColor: '#3c4652', labelFontSize: 11 },
+} as const;
+
+/** Log scale for a positive quantity spanning more than a factor 20, linear otherwise. */
+export function positiveAxisScale(values: number[]): { type: 'log' } | { type: 'linear'; zero: false } {
+  const finite = values.filter(Number.isFinite);
+  const lo = Math.min(...finite);
+  const hi = Math.max(...finite);
+  return lo > 0 && hi / lo > 20 ? { type: 'log' } : { type: 'linear', zero: false };
+}
+
+/**
+ * Tick values for a symlog axis (constant 1): 0, ±1 and the powers of ten inside the data's range,
+ * thinned to every second or third decade when the range is wide, so ν from 1e-1 to 1e8 reads cleanly.
+ */
+export function symlogTicks(values: number[]): number[] {
+  const finite = values.filter(Number.isFinite);
+  const lo = Math.min(-1, ...finite);
+  const hi = Math.max(1, ...finite);
+  const maxDecade = Math.ceil(Math.log10(Math.max(Math.abs(lo), Math.abs(hi))));
+  const stride = maxDecade > 12 ? 3 : maxDecade > 6 ? 2 : 1;
+  const ticks = [0];
+  for (let k = 0; k <= maxDecade; k++) {
+    // ±1 always (edges of the stable band); further decades on the stride
+    if (k > 1 && k % stride !== 0) continue;
+    const p = 10 ** k;
+    if (p <= hi * 1.0001) ticks.push(p);
+    if (-p >= lo * 1.0001) ticks.push(-p);
+  }
+  return ticks.sort((a, b) => a - b);
+}
+
+/** Axis label text for symlog ticks: 1e4 style from ten thousand up. */
+export const SYMLOG_LABEL_EXPR =
+  "abs(datum.value) >= 10000 ? replace(format(datum.value, '.0e'), 'e+', 'e') : format(datum.value, '~g')";
+
+export function memberClass(stable: boolean): string {
+  return stable ? CLASS_STABLE : CLASS_UNSTABLE;
+}
+
+/** Tooltip rows shared by every member layer. */
+export function memberTooltip(secondaryName: string) {
+  return [
+    { field: 'seq', type: 'quantitative', title: 'member #' },
+    { field: 'altKm', type: 'quantitative', title: `min. altitude above ${secondaryName} (km)`, format: ',.1f' },
+    { field: 'nu', type: 'quantitative', title: 'in-plane index ν', format: '.5~g' },
+    { field: 'nuV', type: 'quantitative', title: 'vertical index ν_z', format: '.5~g' },
+    { field: 'jacobi', type: 'quantitative', title: 'Jacobi constant C', format: '.8~f' },
+    { field: 'periodDays', type: 'quantitative', title: 'period (days)', format: '.4f' },
+  ];
+}
+
+/** Member rows with the class the colour and shape read. */
+export function memberValues(members: ChartMember[], stableOf: (m: ChartMember) => boolean) {
+  return members.map((m) => ({ ...m, cls: memberClass(stableOf(m)) }));
+}

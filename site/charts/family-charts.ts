@@ -1,0 +1,29 @@
+// The four charts of a family page, in page order: key, heading, spec and text alternative.
+import type { FamilyChartInput } from './chart-input.ts';
+import { jacobiChartText, periodChartText, stabilityChartText, verticalChartText } from './chart-text.ts';
+import { jacobiAltitudeChart } from './jacobi-altitude-chart.ts';
+import { periodJacobiChart } from './period-jacobi-chart.ts';
+import { stabilityIndexChart } from './stability-index-chart.ts';
+import { verticalIndexChart } from './vertical-index-chart.ts';
+
+export type FamilyChartKey = 'stability' | 'jacobi' | 'period' | 'vertical';
+
+export interface FamilyChartSpec {
+  key: FamilyChartKey;
+  heading: string;
+  text: string;
+  spec: Record<string, unknown>;
+}
+
+export function familyChartSpecs(input: FamilyChartInput): FamilyChartSpec[] {
+  const stabilityText = stabilityChartText(input);
+  const jacobiText = jacobiChartText(input);
+  const periodText = periodChartText(input);
+  const verticalText = verticalChartText(input);
+  return [
+    { key: 'stability', heading: 'In-plane stability index ν', text: stabilityText, spec: stabilityIndexChart(input, stabilityText) },
+    { key: 'jacobi', heading: 'Jacobi constant', text: jacobiText, spec: jacobiAltitudeChart(input, jacobiText) },
+    { key: 'period', heading: 'Period', text: periodText, spec: periodJacobiChart(input, periodText) },
+    { key: 'vertical', heading: 'Vertical stability index ν_z', text: verticalText, spec: verticalIndexChart(input, verticalText) },
+  ];
+}

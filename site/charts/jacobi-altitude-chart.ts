@@ -1,0 +1,29 @@
+// Jacobi constant C against minimum altitude above the smaller body, stable windows shaded.
+import { altitudeChannel } from './altitude-channel.ts';
+import type { FamilyChartInput } from './chart-input.ts';
+import { CHART_HEIGHT, CHART_WIDTH, chartConfig } from './chart-style.ts';
+import { bifurcationLayer, familyLineLayer, memberLayer, windowLayer, type Channel } from './family-chart-layers.ts';
+
+export function jacobiAltitudeChart(input: FamilyChartInput, description: string) {
+  const x = altitudeChannel(input);
+  const y: Channel = {
+    field: 'jacobi',
+    title: 'Jacobi constant C (nondim.)',
+    scale: { type: 'linear', zero: false },
+    axis: { format: '.4~f' },
+  };
+  return {
+    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
+    description,
+    width: CHART_WIDTH,
+    height: CHART_HEIGHT,
+    config: chartConfig,
+    // Empty layers are left out (vega warns about the infinite extent of an empty field).
+    layer: [
+      ...(input.windows.length > 0 ? [windowLayer(input.windows, x, 'fromAltKm', 'toAltKm')] : []),
+      familyLineLayer(input.members, x, y),
+      memberLayer(input.members, x, y, (m) => Math.abs(m.nu) < 1, input.secondaryName),
+      ...(input.bifurcations.length > 0 ? [bifurcationLayer(input.bifurcations, 'altKm', x, y, (b) => b.jacobi)] : []),
+    ],
+  };
+}

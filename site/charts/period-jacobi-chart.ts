@@ -1,0 +1,32 @@
+// Period in days against the Jacobi constant, stable windows shaded over their C range.
+import type { FamilyChartInput } from './chart-input.ts';
+import { CHART_HEIGHT, CHART_WIDTH, chartConfig } from './chart-style.ts';
+import { bifurcationLayer, familyLineLayer, memberLayer, windowLayer, type Channel } from './family-chart-layers.ts';
+
+export function periodJacobiChart(input: FamilyChartInput, description: string) {
+  const x: Channel = {
+    field: 'jacobi',
+    title: 'Jacobi constant C (nondim.)',
+    scale: { type: 'linear', zero: false },
+    axis: { format: '.4~f' },
+  };
+  const y: Channel = {
+    field: 'periodDays',
+    title: 'period (days)',
+    scale: { type: 'linear', zero: false },
+  };
+  return {
+    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
+    description,
+    width: CHART_WIDTH,
+    height: CHART_HEIGHT,
+    config: chartConfig,
+    // Empty layers are left out (vega warns about the infinite extent of an empty field).
+    layer: [
+      ...(input.windows.length > 0 ? [windowLayer(input.windows, x, 'fromJacobi', 'toJacobi')] : []),
+      familyLineLayer(input.members, x, y),
+      memberLayer(input.members, x, y, (m) => Math.abs(m.nu) < 1, input.secondaryName),
+      ...(input.bifurcations.length > 0 ? [bifurcationLayer(input.bifurcations, 'jacobi', x, y, (b) => b.periodDays)] : []),
+    ],
+  };
+}

@@ -1,0 +1,96 @@
+// The site's one door to the database: opens the catalog read-only through catalog-db/ once per build,
+// reads every table into memory with lookups by id, and closes the file.
+import { resolve } from 'node:path';
+import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
+import type {
+  BifurcationRow, FamilyRow, OrbitRow, RunRow, ScenarioMeta, StableWindowRow, SystemRow,
+} from '../../catalog-db/types.ts';
+
+export interface CatalogSnapshot {
+  dbPath: string;
+  scenario: ScenarioMeta | null;
+  systems: SystemRow[];
+  runs: RunRow[];
+  families: FamilyRow[];
+  orbits: OrbitRow[];
+  stableWindows: StableWindowRow[];
+  bifurcations: BifurcationRow[];
+  systemById: Map<string, SystemRow>;
+  familyById: Map<string, FamilyRow>;
+  orbitById: Map<string, OrbitRow>;
+  /** Members of each family in seq order. */
+  orbitsByFamily: Map<string, OrbitRow[]>;
+  /** Index of each orbit in its family's member list. */
+  orbitIndexInFamily: Map<string, number>;
+  windowsByFamily: Map<string, StableWindowRow[]>;
+  bifurcationsByFamily: Map<string, BifurcationRow[]>;
+}
+
+/** Path of the catalog the site is built from: env CYCLER_ATLAS_DB, default catalog-db/demo.sqlite. */
+export function catalogDbPath(): string {
+  return resolve(process.env.CYCLER_ATLAS_DB || 'catalog-db/demo.sqlite');
+}
+
+function groupBy<T>(rows: T[], key: (row: T) => string): Map<string, T[]> {
+  const groups = new Map<string, T[]>();
+  for (const row of rows) {
+    const k = key(row);
+    const list = groups.get(k);
+    if (list) list.push(row);
+    else groups.set(k, [row]);
+  }
+  return groups;
+}
+
+export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
+  const reader = openCatalogForRead(dbPath);
+  try {
+    const systems = reader.systems();
+    const families = reader.families();
+    const orbits = reader.orbits();
+    const stableWindows = reader.stableWindows();
+    const bifurcations = reader.bifurcations();
+    const orbitsByFamily = groupBy(orbits, (o) => o.familyId);
+    const orbitIndexInFamily = new Map<string, number>();
+    for (const members of orbitsByFamily.values()) members.forEach((o, i) => orbitIndexInFamily.set(o.id, i));
+    return {
+      dbPath,
+      scenario: reader.scenario(),
+      systems,
+      runs: reader.runs(),
+      families,
+      orbits,
+      stableWindows,
+      bifurcations,
+      systemById: new Map(systems.map((s) => [s.id, s])),
+      familyById: new Map(families.map((f) => [f.id, f])),
+      orbitById: new Map(orbits.map((o) => [o.id, o])),
+      orbitsByFamily,
+      orbitIndexInFamily,
+      windowsByFamily: groupBy(stableWindows, (w) => w.familyId),
+      bifurcationsByFamily: groupBy(bifurcations, (b) => b.familyId),
+    };
+  } finally {
+    reader.close();
+  }
+}
+
+const snapshots = new Map<string, CatalogSnapshot>();
+
+/** The snapshot of the build's catalog, read on first use and kept for every page of the build. */
+export function loadCatalog(dbPath = catalogDbPath()): CatalogSnapshot {
+  let snapshot = snapshots.get(dbPath);
+  if (!snapshot) {
+    snapshot = readCatalogSnapshot(dbPath);
+    snapshots.set(dbPath, snapshot);
+  }
+  return snapshot;
+}
+
+export function requireFamily(catalog: CatalogSnapshot, familyId: string): { family: FamilyRow; system: SystemRow } {
+  const family = catalog.familyById.get(familyId);
+  if (!family) throw new Error(`family ${JSON.stringify(familyId)} is not in the catalog`);
+  const system = catalog.systemById.get(family.systemId);
+  if (!system) throw new Error(`family ${family.id}: system ${JSON.stringify(family.systemId)} is not in the catalog`);
+  return { family, system };
+}

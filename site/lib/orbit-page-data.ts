@@ -1,0 +1,63 @@
+// Everything an orbit page shows, taken from the catalog rows (no computation beyond unit conversion).
+import type { FamilyRow, OrbitRow, SystemRow } from '../../catalog-db/types.ts';
+import type { CatalogSnapshot } from './catalog-source.ts';
+import { requireFamily } from './catalog-source.ts';
+import { familyHref, orbitHref } from './page-links.ts';
+import { stateToKm, type StateKm } from './state-units.ts';
+
+export interface NeighbourLink {
+  id: string;
+  seq: number;
+  href: string;
+}
+
+export interface OrbitPageData {
+  orbit: OrbitRow;
+  family: FamilyRow;
+  familyHref: string;
+  system: SystemRow;
+  state0Nd: number[];
+  state0Km: StateKm;
+  periodNd: number;
+  periodDays: number;
+  periodS: number;
+  /** Position in the family: 1-based rank among the members and the member count. */
+  rank: number;
+  memberCount: number;
+  previous: NeighbourLink | null;
+  next: NeighbourLink | null;
+  verticalStable: boolean;
+  synodicLock: { p: number; q: number; relError: number | null } | null;
+}
+
+function neighbour(row: OrbitRow | undefined): NeighbourLink | null {
+  return row ? { id: row.id, seq: row.seq, href: orbitHref(row.id) } : null;
+}
+
+export function orbitPageData(catalog: CatalogSnapshot, orbitId: string): OrbitPageData {
+  const orbit = catalog.orbitById.get(orbitId);
+  if (!orbit) throw new Error(`orbit ${JSON.stringify(orbitId)} is not in the catalog`);
+  const { family, system } = requireFamily(catalog, orbit.familyId);
+  const members = catalog.orbitsByFamily.get(family.id) ?? [];
+  const index = catalog.orbitIndexInFamily.get(orbit.id) ?? -1;
+  return {
+    orbit,
+    family,
+    familyHref: familyHref(family.id),
+    system,
+    state0Nd: [...orbit.state0],
+    state0Km: stateToKm(orbit.state0, system.lengthUnitKm, system.timeUnitS),
+    periodNd: orbit.period,
+    periodDays: orbit.periodDays,
+    periodS: orbit.period * system.timeUnitS,
+    rank: index + 1,
+    memberCount: members.length,
+    previous: neighbour(members[index - 1]),
+    next: neighbour(members[index + 1]),
+    verticalStable: Math.abs(orbit.verticalStabilityIndex) < 1,
+    synodicLock:
+      orbit.synodicP !== null && orbit.synodicQ !== null
+        ? { p: orbit.synodicP, q: orbit.synodicQ, relError: orbit.synodicRelError }
+        : null,
+  };
+}

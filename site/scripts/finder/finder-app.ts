@@ -1,0 +1,173 @@
+// Browser side of the orbit finder: loads the column file, keeps the form, the URL and the table in step,
+// renders only the current page of rows, and saves the filtered set as CSV or JSON.
+import { formatFixed, formatSig } from '../../lib/format-number.ts';
+import { idToPath } from '../../lib/id-path.ts';
+import type { FinderDataFile } from './finder-data-types.ts';
+import { rowsToCsv, rowsToJson } from './finder-export.ts';
+import { filterRows } from './finder-filter.ts';
+import { DEFAULT_STATE, queryToState, stateToQuery, type FinderState } from './finder-query.ts';
+import { isSortKey, sortOrder, type SortKey } from './finder-sort.ts';
+import { decodeFinderData, type FinderTable } from './finder-table.ts';
+import { saveTextFile } from '../save-text-file.ts';
+
+const PAGE_SIZE = 50;
+
+function el<K extends keyof HTMLElementTagNameMap>(tag: K, text?: string, className?: string): HTMLElementTagNameMap[K] {
+  const node = document.createElement(tag);
+  if (text !== undefined) node.textContent = text;
+  if (className) node.className = className;
+  return node;
+}
+
+export async function startFinder(root: HTMLElement): Promise<void> {
+  const form = root.querySelector<HTMLFormElement>('#finder-form')!;
+  const tbody = root.querySelector<HTMLTableSectionElement>('#finder-rows')!;
+  const countOut = root.querySelector<HTMLElement>('#finder-count')!;
+  const timeOut = root.querySelector<HTMLElement>('#finder-time')!;
+  const pageOut = root.querySelector<HTMLElement>('#finder-page')!;
+  const prev = root.querySelector<HTMLButtonElement>('#finder-prev')!;
+  const next = root.querySelector<HTMLButtonElement>('#finder-next')!;
+  const base = root.dataset.base ?? '/';
+  const status = root.querySelector<HTMLElement>('#finder-status')!;
+
+  let table: FinderTable;
+  try {
+    const response = await fetch(root.dataset.src!);
+    if (!response.ok) throw new Error(`HTTP ${response.status}`);
+    table = decodeFinderData((await response.json()) as FinderDataFile);
+  } catch (error) {
+    status.textContent = `The orbit list could not be loaded (${(error as Error).message}).`;
+    status.classList.add('error');
+    return;
+  }
+  status.textContent = '';
+
+  let state: FinderState = queryToState(location.search);
+  let order = sortOrder(table, state.sort, state.direction);
+  const hits = new Int32Array(table.n);
+  let hitCount = 0;
+
+  const writeForm = () => {
+    const query = new URLSearchParams(stateToQuery({ ...state, sort: DEFAULT_STATE.sort, direction: 'asc', page: 0 }));
+    for (const element of Array.from(form.elements) as Array<HTMLInputElement | HTMLSelectElement>) {
+      if (!element.name) continue;
+      if (element instanceof HTMLInputElement && element.type === 'checkbox') element.checked = query.get(element.name) === '1';
+      else element.value = query.get(element.name) ?? '';
+    }
+  };
+  const readForm = (): FinderState => {
+    const query = new URLSearchParams();
+    for (const element of Array.from(form.elements) as Array<HTMLInputElement | HTMLSelectElement>) {
+      if (!element.name) continue;
+      if (element instanceof HTMLInputElement && element.type === 'checkbox') {
+        if (element.checked) query.set(element.name, '1');
+      } else if (element.value.trim() !== '') query.set(element.name, element.value.trim());
+    }
+    const parsed = queryToState(query.toString());
+    return { ...parsed, sort: state.sort, direction: state.direction, page: 0 };
+  };
+
+  const familyName = (i: number) => table.meta.families[table.family[i]]?.name ?? '';
+  const renderRows = () => {
+    const pages = Math.max(1, Math.ceil(hitCount / PAGE_SIZE));
+    state.page = Math.min(state.page, pages - 1);
+    const from = state.page * PAGE_SIZE;
+    const to = Math.min(hitCount, from + PAGE_SIZE);
+    const fragment = document.createDocumentFragment();
+    for (let k = from; k < to; k++) {
+      const i = hits[k];
+      const tr = el('tr');
+      tr.dataset.id = table.ids[i];
+      const link = el('a', `${familyName(i)} #${table.seq[i]}`);
+      link.href = `${base}orbit/${idToPath(table.ids[i])}/`;
+      const first = el('td');
+      first.append(link);
+      const system = table.meta.systems[table.familySystem[table.family[i]]];
+      const lock = table.lock[i] < 0 ? '—' : table.meta.locks[table.lock[i]];
+      tr.append(
+        first,
+        el('td', system?.name ?? '', 'nowrap'),
+        el('td', table.meta.signatures[table.signature[i]], 'mono'),
+        el('td', formatSig(table.jacobi[i], 9), 'r num'),
+        el('td', formatFixed(table.periodDays[i], 3), 'r num'),
+        el('td', formatSig(table.nu[i], 5), 'r num'),
+        el('td', formatSig(table.nuV[i], 5), 'r num'),
+        el('td', formatFixed(table.primaryAltKm[i], 0), 'r num'),
+        el('td', formatFixed(table.secondaryAltKm[i], 0), 'r num'),
+        el('td', lock, 'r num'),
+        el('td', table.stable[i] ? 'stable' : 'unstable', table.stable[i] ? 'tag-cell stable' : 'tag-cell unstable'),
+      );
+      fragment.append(tr);
+    }
+    tbody.replaceChildren(fragment);
+    pageOut.textContent = `page ${state.page + 1} of ${pages}`;
+    prev.disabled = state.page === 0;
+    next.disabled = state.page >= pages - 1;
+  };
+
+  const run = (pushUrl: boolean) => {
+    const t0 = performance.now();
+    hitCount = filterRows(table, state.filter, order, hits);
+    const ms = performance.now() - t0;
+    countOut.textContent = `${hitCount.toLocaleString('en-US')} of ${table.n.toLocaleString('en-US')} orbits`;
+    countOut.dataset.count = String(hitCount);
+    timeOut.textContent = `filtered in ${ms.toFixed(1)} ms`;
+    timeOut.dataset.ms = String(ms);
+    renderRows();
+    const query = stateToQuery(state);
+    const url = `${location.pathname}${query ? `?${query}` : ''}`;
+    if (pushUrl) history.replaceState(null, '', url);
+    root.dataset.ready = 'true';
+  };
+
+  const markSort = () => {
+    for (const button of Array.from(root.querySelectorAll<HTMLButtonElement>('button[data-sort]'))) {
+      const active = button.dataset.sort === state.sort;
+      if (active) button.setAttribute('aria-sort-dir', state.direction);
+      else button.removeAttribute('aria-sort-dir');
+      button.closest('th')?.setAttribute('aria-sort', active ? (state.direction === 'asc' ? 'ascending' : 'descending') : 'none');
+    }
+  };
+
+  form.addEventListener('input', () => {
+    state = readForm();
+    run(true);
+  });
+  form.addEventListener('submit', (event) => event.preventDefault());
+  form.addEventListener('reset', () => {
+    setTimeout(() => {
+      state = { ...DEFAULT_STATE, sort: state.sort, direction: state.direction };
+      run(true);
+    });
+  });
+  root.querySelectorAll<HTMLButtonElement>('button[data-sort]').forEach((button) =>
+    button.addEventListener('click', () => {
+      const key = button.dataset.sort ?? '';
+      if (!isSortKey(key)) return;
+      state.direction = state.sort === key && state.direction === 'asc' ? 'desc' : 'asc';
+      state.sort = key as SortKey;
+      state.page = 0;
+      order = sortOrder(table, state.sort, state.direction);
+      markSort();
+      run(true);
+    }),
+  );
+  prev.addEventListener('click', () => {
+    state.page = Math.max(0, state.page - 1);
+    run(true);
+  });
+  next.addEventListener('click', () => {
+    state.page += 1;
+    run(true);
+  });
+  root.querySelector('#finder-csv')!.addEventListener('click', () =>
+    saveTextFile('orbits-filtered.csv', 'text/csv', rowsToCsv(table, hits, hitCount)),
+  );
+  root.querySelector('#finder-json')!.addEventListener('click', () =>
+    saveTextFile('orbits-filtered.json', 'application/json', rowsToJson(table, hits, hitCount, stateToQuery(state))),
+  );
+
+  writeForm();
+  markSort();
+  run(false);
+}

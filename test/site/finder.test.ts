@@ -1,0 +1,122 @@
+// The finder's browser-side filter (plain loops over typed columns) selects exactly the rows the same
+// query selects in SQLite, in the same order; and its URL state survives a round trip.
+import Database from 'better-sqlite3';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readCatalogSnapshot } from '../../site/lib/catalog-source.ts';
+import { finderData } from '../../site/lib/finder-data.ts';
+import { EMPTY_FILTER, filterRows, type FinderFilter } from '../../site/scripts/finder/finder-filter.ts';
+import { queryToState, stateToQuery, type FinderState } from '../../site/scripts/finder/finder-query.ts';
+import { sortOrder } from '../../site/scripts/finder/finder-sort.ts';
+import { decodeFinderData, type FinderTable } from '../../site/scripts/finder/finder-table.ts';
+import { finderSql } from './finder-sql.ts';
+import { writeSiteTestCatalog } from './site-test-catalog.ts';
+
+let dir: string;
+let db: Database.Database;
+let table: FinderTable;
+
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), 'finder-test-'));
+  const path = join(dir, 'catalog.sqlite');
+  writeSiteTestCatalog(path, { orbitCount: 300, familyCount: 5 });
+  // Through JSON text, as the browser gets it.
+  table = decodeFinderData(JSON.parse(JSON.stringify(finderData(readCatalogSnapshot(path)))));
+  db = new Database(path, { readonly: true });
+});
+afterAll(() => {
+  db?.close();
+  rmSync(dir, { recursive: true, force: true });
+});
+
+function finderIds(filter: FinderFilter): string[] {
+  const hits = new Int32Array(table.n);
+  const count = filterRows(table, filter, sortOrder(table, 'orbit', 'asc'), hits);
+  return Array.from(hits.subarray(0, count), (i) => table.ids[i]);
+}
+
+function sqlIds(filter: FinderFilter): string[] {
+  const { sql, params } = finderSql(filter);
+  return (db.prepare(sql).all(...params) as Array<{ id: string }>).map((r) => r.id);
+}
+
+const cases: Array<[string, Partial<FinderFilter>]> = [
+  ['no filter', {}],
+  ['system', { system: 'earth-moon' }],
+  ['family', { family: 'earth-moon/E2M1/a' }],
+  ['signature', { signature: 'E3M1' }],
+  ['Jacobi range', { jacobiMin: 3.05, jacobiMax: 3.12 }],
+  ['period range', { periodDaysMin: 25, periodDaysMax: 40 }],
+  ['stable only', { stableOnly: true }],
+  ['|ν| bound', { nuAbsMax: 0.5 }],
+  ['vertical stable', { vertical: 'stable' }],
+  ['vertical unstable', { vertical: 'unstable' }],
+  ['altitudes', { primaryAltKmMin: 20_000, primaryAltKmMax: 60_000, secondaryAltKmMin: 1_000, secondaryAltKmMax: 15_000 }],
+  ['has a lock', { lock: 'any' }],
+  ['lock 1:1', { lock: '1:1' }],
+  ['combined', { system: 'earth-moon', stableOnly: true, jacobiMin: 3.03, secondaryAltKmMax: 20_000, vertical: 'stable' }],
+  ['unknown family', { family: 'no/such/family' }],
+];
+
+describe('finder filter against SQLite', () => {
+  it.each(cases)('%s', (_label, partial) => {
+    const filter = { ...EMPTY_FILTER, ...partial };
+    const expected = sqlIds(filter);
+    expect(finderIds(filter)).toEqual(expected);
+  });
+
+  it('the checks are not vacuous: most cases select some rows but not all', () => {
+    const counts = cases.map(([, partial]) => sqlIds({ ...EMPTY_FILTER, ...partial }).length);
+    const total = sqlIds(EMPTY_FILTER).length;
+    expect(total).toBe(301);
+    expect(counts.filter((c) => c > 0 && c < total).length).toBeGreaterThanOrEqual(10);
+  });
+
+  it('sorting by a column gives that column in order', () => {
+    const order = sortOrder(table, 'jacobi', 'desc');
+    const hits = new Int32Array(table.n);
+    const count = filterRows(table, EMPTY_FILTER, order, hits);
+    const values = Array.from(hits.subarray(0, count), (i) => table.jacobi[i]);
+    expect(values).toEqual([...values].sort((a, b) => b - a));
+  });
+  it('sorting by synodic lock keeps orbits without a lock last in both directions', () => {
+    for (const direction of ['asc', 'desc'] as const) {
+      const order = Array.from(sortOrder(table, 'lock', direction));
+      const firstLockless = order.findIndex((i) => table.lock[i] < 0);
+      expect(firstLockless).toBeGreaterThan(0);
+      expect(order.slice(firstLockless).every((i) => table.lock[i] < 0)).toBe(true);
+      const ratios = order.slice(0, firstLockless).map((i) => {
+        const [p, q] = table.meta.locks[table.lock[i]].split(':').map(Number);
+        return p / q;
+      });
+      expect(ratios).toEqual([...ratios].sort((a, b) => (direction === 'asc' ? a - b : b - a)));
+    }
+  });
+});
+
+describe('finder URL state', () => {
+  it('round-trips every field', () => {
+    const state: FinderState = {
+      filter: {
+        system: 'earth-moon', family: 'a/b "c" & d', signature: 'E2M1', jacobiMin: 3.01, jacobiMax: 3.2, periodDaysMin: 10,
+        periodDaysMax: 60.5, stableOnly: true, nuAbsMax: 1e3, vertical: 'unstable', primaryAltKmMin: 0, primaryAltKmMax: 1e5,
+        secondaryAltKmMin: 100, secondaryAltKmMax: 2e4, lock: '3:2',
+      },
+      sort: 'nu',
+      direction: 'desc',
+      page: 3,
+    };
+    expect(queryToState(stateToQuery(state))).toEqual(state);
+    expect(queryToState('')).toEqual(queryToState(stateToQuery(queryToState(''))));
+  });
+
+  it('ignores malformed numbers instead of filtering on NaN', () => {
+    const state = queryToState('cmin=abc&cmax=&pmax=12&sort=bogus');
+    expect(state.filter.jacobiMin).toBeNull();
+    expect(state.filter.jacobiMax).toBeNull();
+    expect(state.filter.periodDaysMax).toBe(12);
+    expect(state.sort).toBe('orbit');
+  });
+});

@@ -1,0 +1,243 @@
+// The built site in a real browser (Debian's chromium through playwright-core), served from 127.0.0.1
+// under a base path. Builds its own small catalog: synthetic families for the non-physics checks and the
+// Arenstorf orbit (Hairer, Nørsett & Wanner 1993, §II.0) for the closure check.
+import Database from 'better-sqlite3';
+import { mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { idToPath } from '../../site/lib/id-path.ts';
+import { queryToState } from '../../site/scripts/finder/finder-query.ts';
+import { buildSite, REPO_ROOT } from './build-site.ts';
+import { finderSql } from './finder-sql.ts';
+import { parseOem } from './parse-oem.ts';
+import { ARENSTORF, HOSTILE_SCENARIO, HOSTILE_TEXT, writeSiteTestCatalog } from './site-test-catalog.ts';
+import { serveStatic, type StaticSite } from './static-server.ts';
+
+const BASE = '/atlas/';
+const ARTIFACTS = join(REPO_ROOT, 'test-artifacts');
+
+let dir: string;
+let dbPath: string;
+let arenstorfId: string;
+let site: StaticSite;
+let browser: Browser;
+let context: BrowserContext;
+const requests: string[] = [];
+const pageErrors: string[] = [];
+
+beforeAll(async () => {
+  dir = mkdtempSync(join(tmpdir(), 'site-browser-'));
+  dbPath = join(dir, 'catalog.sqlite');
+  arenstorfId = writeSiteTestCatalog(dbPath, { orbitCount: 40, familyCount: 2 }).arenstorfOrbitId;
+  await buildSite({ dbPath, outDir: join(dir, 'dist'), base: BASE });
+  site = await serveStatic(join(dir, 'dist'), BASE);
+  mkdirSync(ARTIFACTS, { recursive: true });
+  browser = await chromium.launch({
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    args: ['--no-sandbox', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+  context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1280, height: 900 } });
+  context.on('request', (request) => requests.push(request.url()));
+}, 300_000);
+
+afterAll(async () => {
+  await browser?.close();
+  await site?.close();
+  if (dir) rmSync(dir, { recursive: true, force: true });
+});
+
+async function open(path: string, ctx: BrowserContext = context): Promise<Page> {
+  const page = await ctx.newPage();
+  page.on('pageerror', (error) => pageErrors.push(`${path}: ${error.message}`));
+  const response = await page.goto(site.root + path);
+  expect(response?.status(), path).toBe(200);
+  return page;
+}
+
+async function downloadText(page: Page, click: () => Promise<void>): Promise<string> {
+  const [download] = await Promise.all([page.waitForEvent('download'), click()]);
+  const path = await download.path();
+  return readFileSync(path!, 'utf8');
+}
+
+const orbitPath = (id: string) => `orbit/${idToPath(id)}/`;
+const familyPath = (id: string) => `family/${idToPath(id)}/`;
+
+describe('built site in chromium', () => {
+  it('renders each page type (screenshots in test-artifacts/)', async () => {
+    const pages: Array<[string, string]> = [
+      ['home', ''],
+      ['finder', 'finder/'],
+      ['family', familyPath('earth-moon/E1M1/a')],
+      ['orbit', orbitPath(arenstorfId)],
+    ];
+    for (const [name, path] of pages) {
+      const page = await open(path);
+      if (name === 'finder') await page.waitForSelector('#finder[data-ready="true"]');
+      if (name === 'family') await page.waitForSelector('[data-chart-key="stability"][data-interactive="true"]');
+      await page.screenshot({ path: join(ARTIFACTS, `site-${name}.png`), fullPage: true });
+      await page.close();
+    }
+    expect(pageErrors).toEqual([]);
+  });
+
+  it("the finder's filtered rows equal the same query run in SQLite", async () => {
+    const query = 'sys=earth-moon&cmin=3.04&a2max=20000&vert=stable';
+    const page = await open(`finder/?${query}`);
+    await page.waitForSelector('#finder[data-ready="true"]');
+    const db = new Database(dbPath, { readonly: true });
+    const expectIds = (q: string) => {
+      const { sql, params } = finderSql(queryToState(q).filter);
+      return (db.prepare(sql).all(...params) as Array<{ id: string }>).map((r) => r.id);
+    };
+    try {
+      const expected = expectIds(query);
+      expect(expected.length).toBeGreaterThan(3);
+      expect(expected.length).toBeLessThan(41);
+      expect(await page.locator('#finder-count').getAttribute('data-count')).toBe(String(expected.length));
+      const json = JSON.parse(await downloadText(page, () => page.click('#finder-json')));
+      expect(json.orbits.map((o: { id: string }) => o.id)).toEqual(expected);
+      const csv = (await downloadText(page, () => page.click('#finder-csv'))).trim().split('\r\n');
+      expect(csv.slice(1).map((line) => line.split(',')[0])).toEqual(expected);
+      // the visible rows are the first ones of the same set
+      const shown = await page.locator('#finder-rows tr').evaluateAll((rows) => rows.map((r) => (r as HTMLElement).dataset.id));
+      expect(shown).toEqual(expected.slice(0, shown.length));
+
+      // typing a bound updates the count at once and the URL keeps the filter
+      await page.fill('input[name="pmin"]', '25');
+      const typed = expectIds(`${query}&pmin=25`);
+      await expect.poll(() => page.locator('#finder-count').getAttribute('data-count')).toBe(String(typed.length));
+      expect(new URL(page.url()).searchParams.get('pmin')).toBe('25');
+      const reopened = await open(`finder/${new URL(page.url()).search}`);
+      await reopened.waitForSelector('#finder[data-ready="true"]');
+      expect(await reopened.locator('#finder-count').getAttribute('data-count')).toBe(String(typed.length));
+      expect(await reopened.inputValue('input[name="pmin"]')).toBe('25');
+      await reopened.close();
+    } finally {
+      db.close();
+    }
+    await page.close();
+  });
+
+  it('an orbit page shows its numbers', async () => {
+    const db = new Database(dbPath, { readonly: true });
+    const row = db.prepare('SELECT * FROM orbits WHERE id = ?').get(arenstorfId) as Record<string, number | string>;
+    db.close();
+    const page = await open(orbitPath(arenstorfId));
+    const field = (name: string) => page.locator(`#orbit-numbers [data-field="${name}"]`).innerText();
+    expect(await field('jacobi')).toBe(String(row.jacobi));
+    expect(await field('period')).toBe(`${row.period} TU`);
+    expect(await field('periodDays')).toContain(Number(row.period_days).toFixed(6));
+    expect(await field('stabilityIndex')).toBe(String(Number(Number(row.stability_index).toPrecision(10))));
+    const state = await page.locator('#initial-state td[data-nd]').evaluateAll((cells) => cells.map((c) => Number((c as HTMLElement).innerText)));
+    expect(state).toEqual(JSON.parse(String(row.state0)));
+    expect(await page.locator('.plots svg path').count()).toBeGreaterThanOrEqual(6);
+    await page.close();
+  });
+
+  it('a CSV download over one period starts at the initial state and ends within 1e-8 of it; the OEM parses to the same states', async () => {
+    const page = await open(orbitPath(arenstorfId));
+    await page.fill('input[name="periods"]', '1');
+    await page.selectOption('select[name="stepUnit"]', 'tu');
+    await page.fill('input[name="step"]', String(ARENSTORF.periodNd / 300));
+    await page.selectOption('select[name="frame"]', 'rotating');
+    await page.selectOption('select[name="units"]', 'nd');
+    const csv = (await downloadText(page, () => page.click('button[data-format="csv"]'))).trim().split('\n');
+    const rows = csv.slice(1).map((line) => line.split(',').map(Number));
+    expect(rows.length).toBe(301);
+    const state0 = [ARENSTORF.x0, 0, 0, 0, ARENSTORF.vy0, 0];
+    expect(rows[0]).toEqual([0, ...state0]);
+    const last = rows[rows.length - 1];
+    expect(last[0]).toBeCloseTo(ARENSTORF.periodNd, 12);
+    last.slice(1).forEach((v, i) => expect(Math.abs(v - state0[i])).toBeLessThan(1e-8));
+
+    // OEM (km, km/s) against the CSV in km from the same page, inertial frame about the Moon
+    await page.selectOption('select[name="frame"]', 'secondary');
+    await page.selectOption('select[name="units"]', 'km');
+    const kmRows = (await downloadText(page, () => page.click('button[data-format="csv"]'))).trim().split('\n').slice(1)
+      .map((line) => line.split(',').map(Number));
+    const oem = parseOem(await downloadText(page, () => page.click('button[data-format="oem"]')));
+    expect(oem.header.CCSDS_OEM_VERS).toBe('3.0');
+    expect(oem.meta.CENTER_NAME).toBe('MOON');
+    expect(oem.comments.join(' ')).toMatch(/CR3BP model frame, not an ephemeris frame/);
+    expect(oem.states.length).toBe(kmRows.length);
+    oem.states.forEach((state, i) => expect(state).toEqual(kmRows[i].slice(1)));
+    const note = await page.locator('[data-role="download-note"]').innerText();
+    expect(note).toMatch(/^301 states/);
+    await page.close();
+  });
+
+  it('names with markup and quotes show as text', async () => {
+    const home = await open('');
+    expect(await home.locator('h1').innerText()).toBe(HOSTILE_SCENARIO);
+    expect(await home.locator('#families').locator('xpath=following::table[1]').innerText()).toContain(HOSTILE_TEXT);
+    const family = await open(familyPath(queryFamilyId()));
+    expect(await family.locator('h1').innerText()).toBe(HOSTILE_TEXT);
+    const orbit = await open(orbitPath(arenstorfId));
+    expect(await orbit.locator('.crumbs').innerText()).toContain(HOSTILE_TEXT);
+    const finder = await open(`finder/?fam=${encodeURIComponent(queryFamilyId())}`);
+    await finder.waitForSelector('#finder[data-ready="true"]');
+    expect(await finder.locator('#finder-rows tr').first().innerText()).toContain(HOSTILE_TEXT);
+    for (const page of [home, family, orbit, finder]) {
+      expect(await page.evaluate(() => (window as unknown as { __injected?: number }).__injected)).toBeUndefined();
+      await page.close();
+    }
+  });
+
+  it('chart points show values on hover and open the orbit page on click', async () => {
+    const page = await open(familyPath('earth-moon/E1M1/a'));
+    await page.waitForSelector('[data-chart-key="stability"][data-interactive="true"]');
+    const point = page.locator('[data-chart-key="stability"] g.mark-symbol.role-mark path').first();
+    await point.hover();
+    await page.waitForSelector('#vg-tooltip-element.visible');
+    expect(await page.locator('#vg-tooltip-element').innerText()).toMatch(/in-plane index ν/);
+    await Promise.all([page.waitForURL(/\/atlas\/orbit\/earth-moon\/E1M1\/a\/\d{4}\/$/), point.click()]);
+    await page.close();
+  });
+
+  it('every link and asset stays under the base path and resolves', async () => {
+    const paths = ['', 'finder/', familyPath('earth-moon/E1M1/a'), orbitPath('earth-moon/E1M1/a/0003'), orbitPath(arenstorfId)];
+    const urls = new Set<string>();
+    for (const path of paths) {
+      const page = await open(path);
+      const found = await page.evaluate(() =>
+        Array.from(document.querySelectorAll('[href], [src]')).map((el) => (el as HTMLAnchorElement).href || (el as HTMLImageElement).src)
+          .concat(Array.from(document.querySelectorAll('svg a')).map((a) => new URL(a.getAttribute('href') ?? a.getAttribute('xlink:href') ?? '', location.href).href)),
+      );
+      for (const url of found) if (url.startsWith('http')) urls.add(url.split('#')[0]);
+      await page.close();
+    }
+    expect(urls.size).toBeGreaterThan(20);
+    for (const url of urls) {
+      expect(url.startsWith(site.root), url).toBe(true);
+      const response = await context.request.get(url);
+      expect(response.status(), url).toBe(200);
+    }
+  });
+
+  it('reads fine with JavaScript off', async () => {
+    const noScript = await browser.newContext({ javaScriptEnabled: false });
+    const family = await open(familyPath('earth-moon/E1M1/a'), noScript);
+    expect(await family.locator('.chart-host svg').count()).toBe(4);
+    const orbit = await open(orbitPath(arenstorfId), noScript);
+    expect(await orbit.locator('.plots svg').count()).toBe(3);
+    expect(await orbit.locator('#initial-state-download').getAttribute('href')).toMatch(/^data:application\/json/);
+    const finder = await open('finder/', noScript);
+    expect(await finder.locator('#finder-rows tr').count()).toBe(41);
+    await noScript.close();
+  });
+
+  it('no request left 127.0.0.1', () => {
+    expect(requests.length).toBeGreaterThan(20);
+    const outside = requests.filter((url) => !url.startsWith(site.origin) && !url.startsWith('data:') && !url.startsWith('blob:'));
+    expect(outside).toEqual([]);
+    expect(pageErrors).toEqual([]);
+  });
+});
+
+function queryFamilyId(): string {
+  return arenstorfId.slice(0, arenstorfId.lastIndexOf('/'));
+}
