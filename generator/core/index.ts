@@ -4,3 +4,4 @@ export * from './cr3bp/index.ts';
 export * from './events/index.ts';
 export * from './propagation/index.ts';
 export * from './orbits/index.ts';
+export * from './beyond/index.ts';

@@ -1,0 +1,38 @@
+// Beyond the three-body model: the bicircular (Sun) and elliptic (lunar eccentricity) models, screenings of
+// CR3BP orbits in them, the hold radius of a stable orbit, and epoch-dated inertial states.
+export { SIMO_1995_BICIRCULAR, SYNODIC_MONTH_DAYS, SIDEREAL_MONTH_DAYS, LUNAR_ECCENTRICITY, sunRateFromMonthsNd } from './model-constants.ts';
+export { bicircularParameters, modelSynodicMonthNd } from './bicircular-parameters.ts';
+export type { BicircularParameters } from './bicircular-parameters.ts';
+export { bicircularEquations } from './bicircular-equations.ts';
+export { ellipticEquations } from './elliptic-equations.ts';
+export { ellipticInitialState } from './elliptic-initial-state.ts';
+export type { EllipticStart } from './elliptic-initial-state.ts';
+export { AxisCrossingWatch } from './axis-crossing-watch.ts';
+export type { AxisCrossingHandler, WatchStop } from './axis-crossing-watch.ts';
+export { runWithAxisCrossings } from './run-with-axis-crossings.ts';
+export type { RunOutcome, RunTolerance } from './run-with-axis-crossings.ts';
+export { startSection, isOnSection } from './start-section.ts';
+export type { StartSection } from './start-section.ts';
+export { referencePeriod } from './reference-period.ts';
+export type { ReferencePeriod } from './reference-period.ts';
+export { screenInModel } from './screen-in-model.ts';
+export type { BreakReason, PhaseScreening, ScreenedPeriod, ScreeningModel, ScreeningOptions, ScreeningResult } from './screen-in-model.ts';
+export { weightedBirkhoffAverage } from './weighted-birkhoff-average.ts';
+export { circleOrderViolations } from './circle-order-violations.ts';
+export { normalFrame } from './normal-frame.ts';
+export type { NormalFrame } from './normal-frame.ts';
+export { InvariantCurveJudge, DEFAULT_CURVE_JUDGE } from './invariant-curve-judge.ts';
+export type { CurveFailure, CurveJudgeSettings, CurveVerdict } from './invariant-curve-judge.ts';
+export { searchHoldRadius, checkSearchSettings } from './hold-radius-search.ts';
+export type { SearchResult, SearchSettings, Trial } from './hold-radius-search.ts';
+export { henonStep } from './henon-map.ts';
+export { henonHoldRadius, henonTrial } from './henon-hold-radius.ts';
+export type { HenonHoldOptions, HenonTrialDetail } from './henon-hold-radius.ts';
+export { sectionLinearMap } from './section-linear-map.ts';
+export type { SectionLinearMap } from './section-linear-map.ts';
+export { sectionMap, iterateSectionMap } from './section-return-map.ts';
+export type { MapFailure, MapRun, SectionMap } from './section-return-map.ts';
+export { holdRadius } from './hold-radius.ts';
+export type { HoldRadiusOptions, HoldRadiusResult, HoldTrial, TrialFailure } from './hold-radius.ts';
+export { rotatingToInertialAtEpoch } from './rotating-to-inertial-at-epoch.ts';
+export type { EpochFrameInput, InertialState } from './rotating-to-inertial-at-epoch.ts';
