@@ -1,3 +1,6 @@
+import type { HoldRadiusRow, ModelScreeningRow } from './screening-types.ts';
+export type { HoldRadiusRow, ModelScreeningRow, ScreeningModelName, OrbitScreenings } from './screening-types.ts';
+
 // Row shapes of the SQLite catalog, shared by the generator (writes) and the site (reads).
 // Lengths and times are nondimensional unless the name carries a unit (Km, Days, S).
 
@@ -119,6 +122,10 @@ export interface FamilyBundle {
   orbits: OrbitRow[];
   stableWindows: StableWindowRow[];
   bifurcations: BifurcationRow[];
+  /** Hold radius of screened stable members (absent: none screened). */
+  holdRadii?: HoldRadiusRow[];
+  /** Sun (bicircular) and eccentricity (elliptic) screenings of stable members. */
+  modelScreenings?: ModelScreeningRow[];
 }
 
 /** The invented scenario a catalog belongs to, kept in the meta table. */
@@ -138,6 +145,10 @@ export interface CatalogReader {
   orbit(id: string): OrbitRow | undefined;
   stableWindows(familyId?: string): StableWindowRow[];
   bifurcations(familyId?: string): BifurcationRow[];
+  /** Hold radii of screened stable members, ordered by familyId, then the orbit's seq. */
+  holdRadii(familyId?: string): HoldRadiusRow[];
+  /** Sun and eccentricity screenings, ordered by familyId, the orbit's seq, then model. */
+  modelScreenings(familyId?: string): ModelScreeningRow[];
   scenario(): ScenarioMeta | null; // null until setScenario has been called
   close(): void;
 }
