@@ -10,6 +10,7 @@ import { createProgressBars } from './progress-bars.ts';
 import type { ProgressDisplay } from './progress-display.ts';
 import { createProgressLines } from './progress-lines.ts';
 import { generatorVersion, gitCommit, sha256Hex } from './run-provenance.ts';
+import { orderJobsByCost } from './order-jobs-by-cost.ts';
 import { formatShard, selectShard, type Shard } from './shard.ts';
 import { createFamilyPool, defaultWorkerCount } from './worker-pool.ts';
 import { writeJobResult } from './write-job-result.ts';
@@ -78,7 +79,7 @@ export async function generateFromConfig(loaded: LoadedConfig, options: Generate
       shard: formatShard(shard),
       startedAt: new Date().toISOString(),
     });
-    const pending = jobs.filter((job) => !writer.jobDone(job.key));
+    const pending = orderJobsByCost(jobs.filter((job) => !writer.jobDone(job.key)));
     const summary: GenerateSummary = {
       runId,
       jobsInShard: jobs.length,
@@ -141,6 +142,7 @@ async function runJobs(
             display.progress(job, progress);
           });
           if (result.interrupted) summary.interrupted = true;
+          for (const note of result.notes ?? []) display.log(`note: ${note}`);
           const written = writeJobResult(writer, runId, job, result);
           summary.familiesWritten += written.families;
           summary.membersWritten += written.members;
