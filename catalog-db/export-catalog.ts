@@ -1,12 +1,17 @@
 // Whole-catalog (or one-family) downloads: nested JSON with every stored field, and a flat CSV of
-// orbits for spreadsheets (without eigenvalues and monodromy, which the JSON carries).
+// orbits for spreadsheets (without eigenvalues, monodromy, curves and per-phase screening lists,
+// which the JSON carries). Both add per orbit its hold radius, its screenings and whether it is a
+// vertically critical member (orbit-annotations.ts).
 import {
   CATALOG_EXPORT_FORMAT_VERSION,
   type CatalogExport,
   type CatalogExportFamily,
+  type CatalogExportOrbit,
+  type CatalogExportScreening,
 } from './catalog-export-types.ts';
 import { formatCsvRecord, type CsvValue } from './csv-field.ts';
-import type { CatalogReader, FamilyRow, OrbitRow } from './types.ts';
+import { annotateFamilyOrbits, type OrbitAnnotations } from './orbit-annotations.ts';
+import type { CatalogReader, FamilyRow, ModelScreeningRow, OrbitRow } from './types.ts';
 
 export interface ExportOptions {
   familyId?: string; // only this family (with its system and run)
@@ -30,17 +35,43 @@ export function exportCatalogJson(reader: CatalogReader, options: ExportOptions 
 
 function exportFamily(reader: CatalogReader, family: FamilyRow): CatalogExportFamily {
   const { endReasonStart, endReasonEnd, ...rest } = family;
+  const orbits = reader.orbits(family.id);
+  const bifurcations = reader.bifurcations(family.id);
+  const notes = annotateFamilyOrbits(reader, family.id, orbits, bifurcations);
   return {
     ...rest,
     endReasons: { start: endReasonStart, end: endReasonEnd },
-    orbits: reader.orbits(family.id).map(({ familyId: _, ...orbit }) => orbit),
+    orbits: orbits.map((orbit) => exportOrbit(orbit, notes)),
     stableWindows: reader.stableWindows(family.id).map(({ familyId: _, ...window }) => window),
-    bifurcations: reader.bifurcations(family.id).map(({ familyId: _, ...bifurcation }) => bifurcation),
+    bifurcations: bifurcations.map(({ familyId: _, ...bifurcation }) => bifurcation),
   };
 }
 
-/** Columns of the CSV, in order: header name and how to get the value. */
-const csvColumns: ReadonlyArray<readonly [string, (family: FamilyRow, orbit: OrbitRow) => CsvValue]> = [
+/** The orbit's row, plus holdRadius, screenings and verticalBranchPoint where it has them. */
+function exportOrbit({ familyId: _, ...orbit }: OrbitRow, notes: OrbitAnnotations): CatalogExportOrbit {
+  const out: CatalogExportOrbit = { ...orbit };
+  const hold = notes.holdRadius.get(orbit.id);
+  if (hold !== undefined) {
+    const { orbitId: _o, familyId: _f, ...holdRadius } = hold;
+    out.holdRadius = holdRadius;
+  }
+  const screened = notes.screenings.get(orbit.id);
+  if (screened !== undefined) {
+    out.screenings = {};
+    if (screened.bicircular) out.screenings.bicircular = screeningOf(screened.bicircular);
+    if (screened.elliptic) out.screenings.elliptic = screeningOf(screened.elliptic);
+  }
+  const branch = notes.verticalBranchPoint.get(orbit.id);
+  if (branch !== undefined) out.verticalBranchPoint = { ...branch };
+  return out;
+}
+
+function screeningOf({ orbitId: _o, familyId: _f, model: _m, ...rest }: ModelScreeningRow): CatalogExportScreening {
+  return rest;
+}
+
+/** Columns of the CSV, in order: header name and how to get the value (new columns go last). */
+const csvColumns: ReadonlyArray<readonly [string, (family: FamilyRow, orbit: OrbitRow, notes: OrbitAnnotations) => CsvValue]> = [
   ['familyId', (f) => f.id],
   ['familySignature', (f) => f.signature],
   ['familyName', (f) => f.name],
@@ -71,6 +102,12 @@ const csvColumns: ReadonlyArray<readonly [string, (family: FamilyRow, orbit: Orb
   ['synodicRelError', (_, o) => o.synodicRelError],
   ['closureError', (_, o) => o.closureError],
   ['jacobiDrift', (_, o) => o.jacobiDrift],
+  // Empty where the member was not screened (or the model not run for it).
+  ['holdRadiusKm', (_, o, n) => n.holdRadius.get(o.id)?.holdRadiusKm ?? null],
+  ['sunSurvivingFraction', (_, o, n) => n.screenings.get(o.id)?.bicircular?.survivingFraction ?? null],
+  ['eccentricitySurvivingFraction', (_, o, n) => n.screenings.get(o.id)?.elliptic?.survivingFraction ?? null],
+  // 1 or -1 on a vertically critical member (branch point of a spatial family), empty elsewhere.
+  ['verticalCriticalIndex', (_, o, n) => n.verticalBranchPoint.get(o.id)?.verticalIndex ?? null],
 ];
 
 /** One row per orbit after a header row; families in catalog order, orbits in family order. */
@@ -78,8 +115,10 @@ export function exportCatalogCsv(reader: CatalogReader, options: Pick<ExportOpti
   const families = selectFamilies(reader, options.familyId, 'exportCatalogCsv');
   const lines = [formatCsvRecord(csvColumns.map(([name]) => name))];
   for (const family of families) {
-    for (const orbit of reader.orbits(family.id)) {
-      lines.push(formatCsvRecord(csvColumns.map(([, value]) => value(family, orbit))));
+    const orbits = reader.orbits(family.id);
+    const notes = annotateFamilyOrbits(reader, family.id, orbits, reader.bifurcations(family.id));
+    for (const orbit of orbits) {
+      lines.push(formatCsvRecord(csvColumns.map(([, value]) => value(family, orbit, notes))));
     }
   }
   return lines.join('');

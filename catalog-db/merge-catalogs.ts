@@ -152,6 +152,8 @@ function prepareMergeInput(out: Database, outPath: string) {
         orbits: reader.orbits(family.id),
         stableWindows: reader.stableWindows(family.id),
         bifurcations: reader.bifurcations(family.id),
+        holdRadii: reader.holdRadii(family.id),
+        modelScreenings: reader.modelScreenings(family.id),
       });
       report.familiesWritten += 1;
     }

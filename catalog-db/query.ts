@@ -6,6 +6,8 @@ import type { SqlRecord } from './row-mapping.ts';
 import {
   bifurcationTable,
   familyTable,
+  holdRadiusTable,
+  modelScreeningTable,
   orbitTable,
   runTable,
   stableWindowTable,
@@ -35,6 +37,13 @@ export function createCatalogReader(db: Database): CatalogReader {
     familyWindows: all('SELECT * FROM stable_windows WHERE family_id = ? ORDER BY from_arclength, id'),
     allBifurcations: all('SELECT * FROM bifurcations ORDER BY family_id, arclength, id'),
     familyBifurcations: all('SELECT * FROM bifurcations WHERE family_id = ? ORDER BY arclength, id'),
+    allHoldRadii: all(`SELECT h.* FROM hold_radii AS h JOIN orbits AS o ON o.id = h.orbit_id ORDER BY h.family_id, o.seq`),
+    familyHoldRadii: all(`SELECT h.* FROM hold_radii AS h JOIN orbits AS o ON o.id = h.orbit_id
+      WHERE h.family_id = ? ORDER BY o.seq`),
+    allScreenings: all(`SELECT m.* FROM model_screenings AS m JOIN orbits AS o ON o.id = m.orbit_id
+      ORDER BY m.family_id, o.seq, m.model`),
+    familyScreenings: all(`SELECT m.* FROM model_screenings AS m JOIN orbits AS o ON o.id = m.orbit_id
+      WHERE m.family_id = ? ORDER BY o.seq, m.model`),
   };
   const meta = prepareMetaStore(db);
   return {
@@ -51,6 +60,10 @@ export function createCatalogReader(db: Database): CatalogReader {
       (familyId === undefined ? q.allBifurcations() : q.familyBifurcations(familyId)).map(
         bifurcationTable.fromRecord,
       ),
+    holdRadii: (familyId) =>
+      (familyId === undefined ? q.allHoldRadii() : q.familyHoldRadii(familyId)).map(holdRadiusTable.fromRecord),
+    modelScreenings: (familyId) =>
+      (familyId === undefined ? q.allScreenings() : q.familyScreenings(familyId)).map(modelScreeningTable.fromRecord),
     scenario: () => meta.getScenario(),
     close: () => db.close(),
   };

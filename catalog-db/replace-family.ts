@@ -1,7 +1,14 @@
-// Deletes a family (its orbits, windows and bifurcations go with it by ON DELETE CASCADE) and
-// inserts the new bundle. Opens no transaction itself: callers wrap it so that it is all or nothing.
+// Deletes a family (its orbits, windows, bifurcations, hold radii and model screenings go with it by
+// ON DELETE CASCADE) and inserts the new bundle. Opens no transaction itself: callers wrap it so that it is all or nothing.
 import type { Database } from 'better-sqlite3';
-import { bifurcationTable, familyTable, orbitTable, stableWindowTable } from './table-columns.ts';
+import {
+  bifurcationTable,
+  familyTable,
+  holdRadiusTable,
+  modelScreeningTable,
+  orbitTable,
+  stableWindowTable,
+} from './table-columns.ts';
 import type { FamilyBundle } from './types.ts';
 import { assertBundleConsistent } from './validate-bundle.ts';
 
@@ -14,6 +21,8 @@ export function prepareReplaceFamily(db: Database): ReplaceFamily {
   const insertOrbit = db.prepare(orbitTable.insertSql);
   const insertWindow = db.prepare(stableWindowTable.insertSql);
   const insertBifurcation = db.prepare(bifurcationTable.insertSql);
+  const insertHoldRadius = db.prepare(holdRadiusTable.insertSql);
+  const insertScreening = db.prepare(modelScreeningTable.insertSql);
   const systemExists = db.prepare('SELECT 1 FROM systems WHERE id = ?').pluck();
   const runExists = db.prepare('SELECT 1 FROM runs WHERE id = ?').pluck();
 
@@ -32,5 +41,7 @@ export function prepareReplaceFamily(db: Database): ReplaceFamily {
     for (const orbit of bundle.orbits) insertOrbit.run(orbitTable.toRecord(orbit));
     for (const window of bundle.stableWindows) insertWindow.run(stableWindowTable.toRecord(window));
     for (const bifurcation of bundle.bifurcations) insertBifurcation.run(bifurcationTable.toRecord(bifurcation));
+    for (const row of bundle.holdRadii ?? []) insertHoldRadius.run(holdRadiusTable.toRecord(row));
+    for (const row of bundle.modelScreenings ?? []) insertScreening.run(modelScreeningTable.toRecord(row));
   };
 }

@@ -15,7 +15,10 @@ export type ColumnKind =
   | 'bool'
   | 'state6' // [x, y, z, vx, vy, vz]
   | 'complexList' // [[re, im], ...]
-  | 'matrix36'; // 6×6 row-major
+  | 'matrix36' // 6×6 row-major
+  | 'realList' // [a, b, ...], any length (also empty)
+  | 'intOrNullList' // [1, null, 3, ...]
+  | 'realRecord'; // {"name": number, ...}
 
 type Vector6 = [number, number, number, number, number, number];
 
@@ -35,8 +38,12 @@ type KindOf<T> = [T] extends [boolean]
             : [T] extends [Array<[number, number]>]
               ? 'complexList'
               : [T] extends [number[]]
-                ? 'matrix36'
-                : never;
+                ? 'matrix36' | 'realList'
+                : [T] extends [Array<number | null>]
+                  ? 'intOrNullList'
+                  : [T] extends [Record<string, number>]
+                    ? 'realRecord'
+                    : never;
 
 /** One entry per field of Row, none missing. */
 export type ColumnSpec<Row> = { readonly [K in keyof Row]-?: KindOf<Row[K]> };
@@ -72,7 +79,7 @@ export function createRowMapper<Row>(label: string, table: string, spec: ColumnS
     insertSql: `INSERT INTO ${table} (${columns.join(', ')}) VALUES (${columns.map((c) => `@${c}`).join(', ')})`,
     toRecord(row) {
       const source = row as Record<string, unknown>;
-      const rowName = typeof source.id === 'string' || typeof source.id === 'number' ? ` ${source.id}` : '';
+      const rowName = describeRowName(source);
       const record: SqlRecord = {};
       for (const { field, column, kind } of fields) {
         record[column] = encodeValue(source[field], kind, () => `${label}${rowName}: ${field}`);
@@ -113,7 +120,24 @@ function encodeValue(value: unknown, kind: ColumnKind, where: () => string): Sql
       return Array.isArray(value) && value.every((pair) => isFiniteArray(pair, 2))
         ? JSON.stringify(value)
         : fail('an array of [re, im] pairs of finite numbers');
+    case 'realList':
+      return Array.isArray(value) && value.every(isFiniteNumber) ? JSON.stringify(value) : fail('an array of finite numbers');
+    case 'intOrNullList':
+      return Array.isArray(value) && value.every((v) => v === null || Number.isSafeInteger(v))
+        ? JSON.stringify(value)
+        : fail('an array of integers or nulls');
+    case 'realRecord':
+      return value !== null && typeof value === 'object' && !Array.isArray(value) && Object.values(value).every(isFiniteNumber)
+        ? JSON.stringify(value)
+        : fail('an object of finite numbers');
   }
+}
+
+/** " <id>" for rows with an id; rows keyed by their orbit (and model) name those instead. */
+function describeRowName(source: Record<string, unknown>): string {
+  if (typeof source.id === 'string' || typeof source.id === 'number') return ` ${source.id}`;
+  const parts = [source.orbitId, source.model].filter((part) => typeof part === 'string');
+  return parts.length > 0 ? ` ${parts.join(' ')}` : '';
 }
 
 function decodeValue(value: SqlValue, kind: ColumnKind): unknown {
@@ -124,6 +148,9 @@ function decodeValue(value: SqlValue, kind: ColumnKind): unknown {
     case 'state6':
     case 'matrix36':
     case 'complexList':
+    case 'realList':
+    case 'intOrNullList':
+    case 'realRecord':
       return JSON.parse(value as string);
     default:
       return value;

@@ -1,7 +1,9 @@
 -- Schema of a cycler-atlas catalog (SQLite). Applied once to a new file by create-schema.ts,
 -- which also sets PRAGMA user_version to CATALOG_SCHEMA_VERSION (schema-version.ts).
 -- Column names are the snake_case forms of the row fields in types.ts (mapping in table-columns.ts).
--- Arrays (state0, eigenvalues, monodromy) are JSON text. STRICT tables reject values of the wrong type.
+-- Arrays (state0, eigenvalues, monodromy, curves, per-phase lists) and the screening parameters are JSON
+-- text. STRICT tables reject values of the wrong type.
+-- Version 2 added hold_radii, model_screenings and the view vertical_branch_points.
 
 CREATE TABLE systems (
   id                  TEXT PRIMARY KEY,
@@ -111,6 +113,38 @@ CREATE TABLE bifurcations (
   state0               TEXT NOT NULL CHECK (json_array_length(state0) = 6)
 ) STRICT;
 
+-- Hold radius of a screened stable member (our term, DESIGN.md): the largest displacement along its
+-- Poincaré section (toward +x) whose return-map points stay on an invariant curve for `returns` returns,
+-- with the section points (x, vx; nondimensional, decimated) of the outermost holding curve.
+CREATE TABLE hold_radii (
+  orbit_id                TEXT PRIMARY KEY REFERENCES orbits (id) ON DELETE CASCADE,
+  family_id               TEXT NOT NULL REFERENCES families (id) ON DELETE CASCADE,
+  hold_radius_km          REAL NOT NULL CHECK (hold_radius_km >= 0),
+  hold_radius_nd          REAL NOT NULL CHECK (hold_radius_nd >= 0),
+  failing_displacement_km REAL,
+  returns                 INTEGER NOT NULL CHECK (returns > 0),
+  curve_x                 TEXT NOT NULL CHECK (json_type(curve_x) = 'array'),
+  curve_vx                TEXT NOT NULL CHECK (json_array_length(curve_vx) = json_array_length(curve_x)),
+  rotation_per_return_rad REAL
+) STRICT;
+
+-- A stable member propagated in a model beyond the CR3BP: 'bicircular' (the Sun) or 'elliptic' (the
+-- Moon's eccentricity), once per phase; per phase the first broken period (null: survived the span)
+-- and the largest departure from the CR3BP orbit on the section (km).
+CREATE TABLE model_screenings (
+  orbit_id             TEXT NOT NULL REFERENCES orbits (id) ON DELETE CASCADE,
+  family_id            TEXT NOT NULL REFERENCES families (id) ON DELETE CASCADE,
+  model                TEXT NOT NULL CHECK (model IN ('bicircular', 'elliptic')),
+  span_nd              REAL NOT NULL CHECK (span_nd > 0),
+  phases               INTEGER NOT NULL CHECK (phases > 0),
+  surviving_fraction   REAL NOT NULL CHECK (surviving_fraction BETWEEN 0 AND 1),
+  first_broken_periods TEXT NOT NULL CHECK (json_array_length(first_broken_periods) = phases),
+  phase_rad            TEXT NOT NULL CHECK (json_array_length(phase_rad) = phases),
+  max_departure_km     TEXT NOT NULL CHECK (json_array_length(max_departure_km) = phases),
+  parameters           TEXT NOT NULL CHECK (json_type(parameters) = 'object'),
+  PRIMARY KEY (orbit_id, model)
+) STRICT;
+
 -- One row per config entry (job) whose families are all written; resume skips these.
 CREATE TABLE jobs (
   job_key TEXT PRIMARY KEY,
@@ -131,3 +165,23 @@ CREATE INDEX stable_windows_by_family ON stable_windows (family_id, from_arcleng
 -- Without this index every deleted orbit would scan stable_windows for the cascade.
 CREATE INDEX stable_windows_by_mid_orbit ON stable_windows (mid_orbit_id);
 CREATE INDEX bifurcations_by_family ON bifurcations (family_id, arclength);
+CREATE INDEX hold_radii_by_family ON hold_radii (family_id);
+CREATE INDEX model_screenings_by_family ON model_screenings (family_id);
+
+-- Vertically critical members (vertical stability index = +1 or -1): the branch points of spatial
+-- families off these planar ones. They are the bifurcation rows with plane 'vertical'; the view names
+-- the member stored there (same family, same arclength) and the index value it crosses.
+CREATE VIEW vertical_branch_points AS
+SELECT
+  b.id AS bifurcation_id,
+  b.family_id,
+  o.id AS orbit_id,
+  b.kind,
+  CASE b.kind WHEN 'tangent' THEN 1 ELSE -1 END AS vertical_index,
+  b.jacobi,
+  b.period_days,
+  b.secondary_min_alt_km,
+  b.state0
+FROM bifurcations AS b
+LEFT JOIN orbits AS o ON o.family_id = b.family_id AND o.arclength = b.arclength
+WHERE b.plane = 'vertical';

@@ -4,6 +4,8 @@
 import type {
   BifurcationRow,
   FamilyRow,
+  HoldRadiusRow,
+  ModelScreeningRow,
   OrbitRow,
   RunRow,
   StableWindowRow,
@@ -118,9 +120,36 @@ const bifurcationColumns: ColumnSpec<BifurcationRow> = {
   state0: 'state6',
 };
 
+const holdRadiusColumns: ColumnSpec<HoldRadiusRow> = {
+  orbitId: 'text',
+  familyId: 'text',
+  holdRadiusKm: 'real',
+  holdRadiusNd: 'real',
+  failingDisplacementKm: 'real?',
+  returns: 'int',
+  curveX: 'realList',
+  curveVx: 'realList',
+  rotationPerReturnRad: 'real?',
+};
+
+const modelScreeningColumns: ColumnSpec<ModelScreeningRow> = {
+  orbitId: 'text',
+  familyId: 'text',
+  model: 'text',
+  spanNd: 'real',
+  phases: 'int',
+  survivingFraction: 'real',
+  firstBrokenPeriods: 'intOrNullList',
+  phaseRad: 'realList',
+  maxDepartureKm: 'realList',
+  parameters: 'realRecord',
+};
+
 export const systemTable = createRowMapper('system', 'systems', systemColumns);
 export const runTable = createRowMapper('run', 'runs', runColumns);
 export const familyTable = createRowMapper('family', 'families', familyColumns);
 export const orbitTable = createRowMapper('orbit', 'orbits', orbitColumns);
 export const stableWindowTable = createRowMapper('stable window', 'stable_windows', stableWindowColumns);
 export const bifurcationTable = createRowMapper('bifurcation', 'bifurcations', bifurcationColumns);
+export const holdRadiusTable = createRowMapper('hold radius', 'hold_radii', holdRadiusColumns);
+export const modelScreeningTable = createRowMapper('model screening', 'model_screenings', modelScreeningColumns);

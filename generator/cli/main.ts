@@ -3,6 +3,7 @@
 import { Command } from 'commander';
 import { exitWithUsageCode } from '../run/command-exit.ts';
 import { createExportCommand } from './commands/export.ts';
+import { createExportStateCommand } from './commands/export-state.ts';
 import { createGenerateCommand } from './commands/generate.ts';
 import { createMergeCommand } from './commands/merge.ts';
 import { createPropagateCommand } from './commands/propagate.ts';
@@ -15,6 +16,7 @@ const COMMANDS: Array<() => Command> = [
   createExportCommand,
   createMergeCommand,
   createPropagateCommand,
+  createExportStateCommand,
 ];
 
 const program = new Command('cycler-atlas')

@@ -2,7 +2,7 @@
 // that order and on the stable keys, e.g. "earth-moon:E2M1", "earth-moon:L1-lyapunov").
 import type { FamilyJob, SeedRule, SystemSpec } from '../core/orbits/family-job.ts';
 import type { CatalogConfig } from './config-schema.ts';
-import { familyKeyOf, familyNameOf, lyapunovAmplitudeNd, resolveLimits, resolveSearch } from './family-settings.ts';
+import { familyKeyOf, familyNameOf, lyapunovAmplitudeNd, resolveLimits, resolveScreening, resolveSearch } from './family-settings.ts';
 import { resolveSystem } from './resolve-system.ts';
 import { systemJacobiBounds } from './system-jacobi-bounds.ts';
 import { ConfigError } from './validate-config.ts';
@@ -27,6 +27,7 @@ export function buildJobs(config: CatalogConfig, configPath: string): FamilyJob[
       limits: resolveLimits(config, index, bounds).limits,
       tolerance: { rtol: config.tolerance.rtol, atol: config.tolerance.atol },
       indexTolerance: config.indexTolerance,
+      screening: resolveScreening(config, index),
     };
   });
 }

@@ -7,6 +7,7 @@ import { SYSTEM_PRESETS } from '../core/cr3bp/system-presets.ts';
 import { count, list, oneOf, ruledNumber, strictObject, text } from './config-rules.ts';
 import { DEFAULT_INDEX_TOLERANCE, DEFAULT_TOLERANCE } from './default-settings.ts';
 import { formatValue } from './format-value.ts';
+import { screeningSchema } from './screening-schema.ts';
 
 /** Largest n and m of a lap signature E{n}M{m} the generator is asked to search. */
 export const MAX_SIGNATURE_LAPS = 20;
@@ -85,6 +86,8 @@ const familyCommon = {
   system: systemId,
   name: text('display name', 120).optional(),
   limits: limitsSchema.optional(),
+  /** Overrides the top-level screening settings for this family, key by key. */
+  screening: screeningSchema.optional(),
 };
 
 export const signatureFamilySchema = strictObject(
@@ -138,6 +141,8 @@ export const catalogConfigShape = strictObject(
       { limits: limitsSchema.optional(), search: searchSchema.optional() },
       'limits and search settings for every family',
     ).optional(),
+    /** Screenings of stable members for every family (on by default: see DEFAULT_SCREENING). */
+    screening: screeningSchema.optional(),
     families: list(familyEntrySchema, 1, 500, 'families to generate'),
   },
   'a catalog config',

@@ -1,6 +1,6 @@
 // Built-in settings used where the config (or the one-family command line) leaves them out.
 // Rough first values, meant to be tuned: modest enough that the demo runs in minutes.
-import type { AxisSegment, FamilyLimits } from '../core/orbits/family-job.ts';
+import type { AxisSegment, FamilyLimits, ScreeningSettings } from '../core/orbits/family-job.ts';
 import type { SystemJacobiBounds } from './system-jacobi-bounds.ts';
 
 export const DEFAULT_TOLERANCE = { rtol: 1e-12, atol: 1e-12 } as const;
@@ -53,3 +53,14 @@ export function defaultJacobiLimits(kind: FamilyEntryKind, bounds: SystemJacobiB
 export function defaultJacobiValues(bounds: SystemJacobiBounds): number[] {
   return [0.2, 0.4, 0.6, 0.8].map((f) => Math.round((bounds.l3 + f * (bounds.l1 - bounds.l3)) * 1e4) / 1e4);
 }
+
+/**
+ * Screenings of stable members, all on. 200 returns per hold-radius trial (the definition's N; the
+ * core's criterion is tuned for it); 4 members besides each window's middle; 12 synodic months and 8
+ * phases for the Sun and the eccentricity. The demo with these runs in a few minutes (bench/beyond-demo.ts).
+ */
+export const DEFAULT_SCREENING: ScreeningSettings = {
+  holdRadius: { enabled: true, returns: 200, membersPerWindow: 4 },
+  sun: { enabled: true, spanSynodicMonths: 12, phases: 8 },
+  eccentricity: { enabled: true, spanSynodicMonths: 12, phases: 8 },
+};

@@ -1,11 +1,12 @@
 // What a family entry asks for once the config's defaults and the built-in defaults are filled in,
 // remembering where each value came from so that a bad combination is reported at the right place.
-import type { FamilyLimits } from '../core/orbits/family-job.ts';
+import type { FamilyLimits, ScreeningSettings } from '../core/orbits/family-job.ts';
 import type { CatalogConfig, FamilyEntry } from './config-schema.ts';
 import type { ConfigPath } from './config-path.ts';
 import {
   DEFAULT_LIMITS,
   DEFAULT_LYAPUNOV_AMPLITUDE_ND,
+  DEFAULT_SCREENING,
   DEFAULT_SEARCH,
   defaultJacobiLimits,
   defaultJacobiValues,
@@ -121,4 +122,17 @@ export function resolveSearch(config: CatalogConfig, index: number, bounds: Syst
 
 export function lyapunovAmplitudeNd(entry: FamilyEntry): number {
   return 'lyapunov' in entry ? (entry.amplitudeNd ?? DEFAULT_LYAPUNOV_AMPLITUDE_ND) : Number.NaN;
+}
+
+/** Screening settings of a family entry, key by key: its own, else the top-level ones, else built-in. */
+export function resolveScreening(config: CatalogConfig, index: number): ScreeningSettings {
+  const own = (config.families[index] as FamilyEntry).screening ?? {};
+  const shared = config.screening ?? {};
+  const part = <K extends keyof ScreeningSettings>(key: K): ScreeningSettings[K] =>
+    ({ ...DEFAULT_SCREENING[key], ...definedOnly(shared[key]), ...definedOnly(own[key]) }) as ScreeningSettings[K];
+  return { holdRadius: part('holdRadius'), sun: part('sun'), eccentricity: part('eccentricity') };
+}
+
+function definedOnly<T extends object>(values: T | undefined): Partial<T> {
+  return Object.fromEntries(Object.entries(values ?? {}).filter(([, value]) => value !== undefined)) as Partial<T>;
 }

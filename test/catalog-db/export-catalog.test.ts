@@ -92,6 +92,11 @@ describe('exportCatalogJson', () => {
     expect(schemaJson.$schema).toBe('https://json-schema.org/draft/2020-12/schema');
   });
 
+  it('describes the optional per-orbit screening objects (checked with data in test/beyond-integration/export-screenings.test.ts)', () => {
+    for (const key of ['holdRadius', 'screenings', 'verticalBranchPoint']) expect(schemaJson.$defs.orbit.properties).toHaveProperty(key);
+    expect(schemaJson.$defs.orbit.required).not.toContain('holdRadius');
+  });
+
   it('carries the stored rows unchanged, families in catalog order', () => {
     const exported = exportCatalogJson(reader, { generatedAt: '2026-04-01T00:00:00.000Z' });
     expect(exported.generatedAt).toBe('2026-04-01T00:00:00.000Z');

@@ -6,6 +6,7 @@ import Database from 'better-sqlite3';
 import { describe, expect, it } from 'vitest';
 import { mergeCatalogs } from '../../catalog-db/merge-catalogs.ts';
 import { openCatalogForRead, openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
+import { CATALOG_SCHEMA_VERSION } from '../../catalog-db/schema-version.ts';
 import type { CatalogWriter, SystemRow } from '../../catalog-db/types.ts';
 import { makeBundle, makeRunInput, makeScenario, makeSystem } from './make-rows.ts';
 import { useTempCatalogDir } from './temp-catalog-path.ts';
@@ -148,7 +149,7 @@ describe('mergeCatalogs', () => {
     const raw = new Database(old);
     raw.pragma('user_version = 0');
     raw.close();
-    expect(() => mergeCatalogs(out, [a, old])).toThrow(`catalog ${old} has schema version 0, this cycler-atlas needs 1`);
+    expect(() => mergeCatalogs(out, [a, old])).toThrow(`catalog ${old} has schema version 0, this cycler-atlas needs ${CATALOG_SCHEMA_VERSION}`);
     expect(existsSync(out)).toBe(false);
     expect(() => mergeCatalogs(a, [a])).toThrow(`mergeCatalogs: input ${a} is the output catalog itself`);
     expect(() => mergeCatalogs(out, [])).toThrow('mergeCatalogs: inPaths must list at least one input catalog');

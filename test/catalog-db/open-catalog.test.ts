@@ -10,6 +10,8 @@ import { CATALOG_SCHEMA_VERSION } from '../../catalog-db/schema-version.ts';
 import {
   bifurcationTable,
   familyTable,
+  holdRadiusTable,
+  modelScreeningTable,
   orbitTable,
   runTable,
   stableWindowTable,
@@ -29,7 +31,7 @@ describe('opening a catalog', () => {
     expect(db.pragma('journal_mode', { simple: true })).toBe('wal');
     expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
     const tables = db.prepare("SELECT name FROM sqlite_schema WHERE type = 'table' ORDER BY name").pluck().all();
-    expect(tables).toEqual(['bifurcations', 'families', 'jobs', 'meta', 'orbits', 'runs', 'stable_windows', 'systems']);
+    expect(tables).toEqual(['bifurcations', 'families', 'hold_radii', 'jobs', 'meta', 'model_screenings', 'orbits', 'runs', 'stable_windows', 'systems']);
     // The site reads a family's members by (family_id, seq); the plan must use the index, not a scan.
     const plan = db
       .prepare("EXPLAIN QUERY PLAN SELECT * FROM orbits WHERE family_id = 'x' ORDER BY seq")
@@ -40,7 +42,7 @@ describe('opening a catalog', () => {
 
   it('maps every row field to a column of schema.sql and every column to a field', () => {
     const db = new Database(catalogPath('new.sqlite'), { readonly: true });
-    for (const table of [systemTable, runTable, familyTable, orbitTable, stableWindowTable, bifurcationTable]) {
+    for (const table of [systemTable, runTable, familyTable, orbitTable, stableWindowTable, bifurcationTable, holdRadiusTable, modelScreeningTable]) {
       const columns = (db.pragma(`table_info(${table.table})`) as Array<{ name: string }>).map((c) => c.name);
       expect([...table.columns].sort(), table.table).toEqual([...columns].sort());
     }

@@ -48,6 +48,19 @@ export interface SystemSpec {
   source: string;
 }
 
+/**
+ * Screenings of stable members "beyond the three-body model" (core/beyond): the hold radius of the middle
+ * member of every stable window and membersPerWindow more across it; the Sun (bicircular model) and the
+ * Moon's eccentricity (elliptic model) for every stable member inside a window.
+ */
+export interface ScreeningSettings {
+  holdRadius: { enabled: boolean; returns: number; membersPerWindow: number };
+  /** Span in the system's synodic months; skipped (and said so) for a system without one. */
+  sun: { enabled: boolean; spanSynodicMonths: number; phases: number };
+  /** Span in synodic months (the secondary's orbital periods for a system without a synodic month). */
+  eccentricity: { enabled: boolean; spanSynodicMonths: number; phases: number };
+}
+
 export interface FamilyJob {
   /** Stable key of the config entry (resume skips finished keys), e.g. "earth-moon:E2M1". */
   key: string;
@@ -59,6 +72,8 @@ export interface FamilyJob {
   tolerance: { rtol: number; atol: number };
   /** Window edges located to this accuracy in ν. */
   indexTolerance: number;
+  /** Screenings of the stable members (absent: none, as with every setting disabled). */
+  screening?: ScreeningSettings;
 }
 
 export interface JobProgress {
@@ -79,4 +94,6 @@ export interface JobResult {
   /** Families found, complete unless `interrupted`. runId is 0: the writer sets it. */
   bundles: FamilyBundle[];
   interrupted: boolean;
+  /** One-line remarks for the run log, e.g. a screening skipped and why. */
+  notes?: string[];
 }

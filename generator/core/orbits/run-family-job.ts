@@ -1,5 +1,6 @@
 // One job of the generator: find the seeds its rule asks for, continue every distinct family they start,
-// locate the stability changes and hand back catalog-ready bundles. Pure numerics, synchronous.
+// locate the stability changes, screen the stable members (job.screening: screen-stable-members.ts) and
+// hand back catalog-ready bundles. Pure numerics, synchronous.
 import type { FamilyBundle, FamilyKind } from '../../../catalog-db/types.ts';
 import { lagrangePoints } from '../cr3bp/lagrange-points.ts';
 import { screenOrbit, type AnalysisContext } from './analyse-orbit.ts';
@@ -13,6 +14,7 @@ import { footprintOf, liesOnFamily } from './lies-on-family.ts';
 import { locateStabilityChanges } from './locate-stability-changes.ts';
 import { lyapunovGuess, retrogradeGuess } from './reference-seeds.ts';
 import { cachedScan } from './cached-scan.ts';
+import { screenStableMembers } from './screen-stable-members.ts';
 import type { SeedCandidate } from './scan-axis-segment.ts';
 
 interface Seed {
@@ -108,6 +110,7 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
 
   const bundles: FamilyBundle[] = [];
   const continued: FamilyMember[][] = [];
+  const notes: string[] = [];
   let interrupted = false;
   for (const seed of seeds()) {
     if (hooks.shouldStop?.()) {
@@ -144,13 +147,27 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
     const map = stopped
       ? { members: result.members, changes: [], windows: [] }
       : locateStabilityChanges(context, seed.halfCrossings, result.members, job.indexTolerance, corrector);
-    bundles.push(buildFamilyBundle(system, {
+    const bundle = buildFamilyBundle(system, {
       id: `${system.id}/${label}/${letter}`, jobKey: job.key, name: job.name, kind, signature: label, seedSegment: seed.segment,
-    }, map, { start: result.endReasonStart, end: result.endReasonEnd }));
-    if (stopped) {
+    }, map, { start: result.endReasonStart, end: result.endReasonEnd });
+    bundles.push(bundle);
+    if (!stopped && job.screening && bundle.stableWindows.length > 0) {
+      const screened = screenStableMembers(system, bundle, job.screening, tolerance, {
+        // From the first member screened on: the displays read members 0 as "seed search".
+        onMember: (done, total) => done > 0 && hooks.onProgress?.({
+          jobKey: job.key, familyLabel: `${familyLabel} screening`, familiesDone: continued.length - 1, members: done, maxMembers: total,
+        }),
+        shouldStop: hooks.shouldStop,
+      });
+      bundle.holdRadii = screened.holdRadii;
+      bundle.modelScreenings = screened.modelScreenings;
+      notes.push(...screened.notes);
+      if (screened.interrupted) interrupted = true;
+    }
+    if (stopped || interrupted) {
       interrupted = true;
       break;
     }
   }
-  return { bundles, interrupted };
+  return notes.length > 0 ? { bundles, interrupted, notes } : { bundles, interrupted };
 }
