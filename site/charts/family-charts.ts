@@ -5,8 +5,11 @@ import { jacobiAltitudeChart } from './jacobi-altitude-chart.ts';
 import { periodJacobiChart } from './period-jacobi-chart.ts';
 import { stabilityIndexChart } from './stability-index-chart.ts';
 import { verticalIndexChart } from './vertical-index-chart.ts';
+import { holdRadiusChart } from './hold-radius-chart.ts';
+import type { HoldRadiusChartInput } from './hold-radius-input.ts';
+import { holdRadiusChartText } from './hold-radius-text.ts';
 
-export type FamilyChartKey = 'stability' | 'jacobi' | 'period' | 'vertical';
+export type FamilyChartKey = 'stability' | 'jacobi' | 'period' | 'vertical' | 'hold';
 
 export interface FamilyChartSpec {
   key: FamilyChartKey;
@@ -26,4 +29,10 @@ export function familyChartSpecs(input: FamilyChartInput): FamilyChartSpec[] {
     { key: 'period', heading: 'Period', text: periodText, spec: periodJacobiChart(input, periodText) },
     { key: 'vertical', heading: 'Vertical stability index ν_z', text: verticalText, spec: verticalIndexChart(input, verticalText) },
   ];
+}
+
+/** The hold-radius chart of a family with screened members. */
+export function holdRadiusChartSpec(input: HoldRadiusChartInput): FamilyChartSpec {
+  const text = holdRadiusChartText(input);
+  return { key: 'hold', heading: 'Hold radius across the stable windows', text, spec: holdRadiusChart(input, text) };
 }

@@ -3,7 +3,8 @@
 import { resolve } from 'node:path';
 import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
 import type {
-  BifurcationRow, FamilyRow, OrbitRow, RunRow, ScenarioMeta, StableWindowRow, SystemRow,
+  BifurcationRow, FamilyRow, HoldRadiusRow, ModelScreeningRow, OrbitRow, OrbitScreenings, RunRow, ScenarioMeta,
+  StableWindowRow, SystemRow,
 } from '../../catalog-db/types.ts';
 
 export interface CatalogSnapshot {
@@ -15,6 +16,8 @@ export interface CatalogSnapshot {
   orbits: OrbitRow[];
   stableWindows: StableWindowRow[];
   bifurcations: BifurcationRow[];
+  holdRadii: HoldRadiusRow[];
+  modelScreenings: ModelScreeningRow[];
   systemById: Map<string, SystemRow>;
   familyById: Map<string, FamilyRow>;
   orbitById: Map<string, OrbitRow>;
@@ -24,6 +27,9 @@ export interface CatalogSnapshot {
   orbitIndexInFamily: Map<string, number>;
   windowsByFamily: Map<string, StableWindowRow[]>;
   bifurcationsByFamily: Map<string, BifurcationRow[]>;
+  holdRadiiByFamily: Map<string, HoldRadiusRow[]>;
+  /** Hold radius and model screenings of each screened orbit (absent: not screened). */
+  screeningsByOrbit: Map<string, OrbitScreenings>;
 }
 
 /** Path of the catalog the site is built from: env CYCLER_ATLAS_DB, default catalog-db/demo.sqlite. */
@@ -42,6 +48,21 @@ function groupBy<T>(rows: T[], key: (row: T) => string): Map<string, T[]> {
   return groups;
 }
 
+function screeningsByOrbit(holdRadii: HoldRadiusRow[], screenings: ModelScreeningRow[]): Map<string, OrbitScreenings> {
+  const byOrbit = new Map<string, OrbitScreenings>();
+  const entry = (orbitId: string) => {
+    let e = byOrbit.get(orbitId);
+    if (!e) {
+      e = { holdRadius: null, bicircular: null, elliptic: null };
+      byOrbit.set(orbitId, e);
+    }
+    return e;
+  };
+  for (const h of holdRadii) entry(h.orbitId).holdRadius = h;
+  for (const m of screenings) entry(m.orbitId)[m.model] = m;
+  return byOrbit;
+}
+
 export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
   const reader = openCatalogForRead(dbPath);
   try {
@@ -50,6 +71,8 @@ export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
     const orbits = reader.orbits();
     const stableWindows = reader.stableWindows();
     const bifurcations = reader.bifurcations();
+    const holdRadii = reader.holdRadii();
+    const modelScreenings = reader.modelScreenings();
     const orbitsByFamily = groupBy(orbits, (o) => o.familyId);
     const orbitIndexInFamily = new Map<string, number>();
     for (const members of orbitsByFamily.values()) members.forEach((o, i) => orbitIndexInFamily.set(o.id, i));
@@ -62,6 +85,8 @@ export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
       orbits,
       stableWindows,
       bifurcations,
+      holdRadii,
+      modelScreenings,
       systemById: new Map(systems.map((s) => [s.id, s])),
       familyById: new Map(families.map((f) => [f.id, f])),
       orbitById: new Map(orbits.map((o) => [o.id, o])),
@@ -69,6 +94,8 @@ export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
       orbitIndexInFamily,
       windowsByFamily: groupBy(stableWindows, (w) => w.familyId),
       bifurcationsByFamily: groupBy(bifurcations, (b) => b.familyId),
+      holdRadiiByFamily: groupBy(holdRadii, (h) => h.familyId),
+      screeningsByOrbit: screeningsByOrbit(holdRadii, modelScreenings),
     };
   } finally {
     reader.close();

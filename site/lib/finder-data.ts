@@ -28,7 +28,7 @@ export function finderData(catalog: CatalogSnapshot): FinderDataFile {
   const orbits = catalog.orbits;
   const columns: FinderDataFile['columns'] = {
     id: [], family: [], seq: [], signature: [], jacobi: [], periodDays: [], nu: [], nuV: [],
-    primaryAltKm: [], secondaryAltKm: [], stable: [], lock: [], lockRelError: [],
+    primaryAltKm: [], secondaryAltKm: [], stable: [], lock: [], lockRelError: [], holdKm: [], sun: [], ecc: [],
   };
   for (const o of orbits) {
     columns.id.push(o.id);
@@ -45,6 +45,10 @@ export function finderData(catalog: CatalogSnapshot): FinderDataFile {
     const hasLock = o.synodicP !== null && o.synodicQ !== null;
     columns.lock.push(hasLock ? locks.index(`${o.synodicP}:${o.synodicQ}`) : -1);
     columns.lockRelError.push(o.synodicRelError);
+    const screenings = catalog.screeningsByOrbit.get(o.id);
+    columns.holdKm.push(screenings?.holdRadius?.holdRadiusKm ?? null);
+    columns.sun.push(screenings?.bicircular?.survivingFraction ?? null);
+    columns.ecc.push(screenings?.elliptic?.survivingFraction ?? null);
   }
   return {
     version: FINDER_DATA_VERSION,

@@ -1,7 +1,8 @@
 // Everything an orbit page shows, taken from the catalog rows (no computation beyond unit conversion).
-import type { FamilyRow, OrbitRow, SystemRow } from '../../catalog-db/types.ts';
+import type { FamilyRow, OrbitRow, OrbitScreenings, SystemRow } from '../../catalog-db/types.ts';
 import type { CatalogSnapshot } from './catalog-source.ts';
 import { requireFamily } from './catalog-source.ts';
+import { screeningView, type ScreeningView } from './orbit-screening-view.ts';
 import { familyHref, orbitHref } from './page-links.ts';
 import { stateToKm, type StateKm } from './state-units.ts';
 
@@ -28,6 +29,10 @@ export interface OrbitPageData {
   next: NeighbourLink | null;
   verticalStable: boolean;
   synodicLock: { p: number; q: number; relError: number | null } | null;
+  /** The catalog's hold-radius and screening rows of this orbit (null: not screened). */
+  screenings: OrbitScreenings | null;
+  /** The same, converted for display. */
+  screening: ScreeningView;
 }
 
 function neighbour(row: OrbitRow | undefined): NeighbourLink | null {
@@ -40,6 +45,7 @@ export function orbitPageData(catalog: CatalogSnapshot, orbitId: string): OrbitP
   const { family, system } = requireFamily(catalog, orbit.familyId);
   const members = catalog.orbitsByFamily.get(family.id) ?? [];
   const index = catalog.orbitIndexInFamily.get(orbit.id) ?? -1;
+  const screenings = catalog.screeningsByOrbit.get(orbit.id) ?? null;
   return {
     orbit,
     family,
@@ -59,5 +65,7 @@ export function orbitPageData(catalog: CatalogSnapshot, orbitId: string): OrbitP
       orbit.synodicP !== null && orbit.synodicQ !== null
         ? { p: orbit.synodicP, q: orbit.synodicQ, relError: orbit.synodicRelError }
         : null,
+    screenings,
+    screening: screeningView(screenings ?? undefined, orbit, system),
   };
 }

@@ -16,6 +16,15 @@ export interface RenderedChart {
   project(x: number, y: number): [number, number];
 }
 
+function hasScale(view: View, name: string): boolean {
+  try {
+    view.scale(name);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
 export async function renderChart(spec: Record<string, unknown>): Promise<RenderedChart> {
   // eslint-disable-next-line @typescript-eslint/no-explicit-any
   const vegaSpec = compile(spec as any).spec;
@@ -28,14 +37,18 @@ export async function renderChart(spec: Record<string, unknown>): Promise<Render
   // The plot area's origin is the first group translation (autosize padding + axis space).
   const origin = /transform="translate\(([-\d.]+),([-\d.]+)\)"/.exec(svg);
   if (!size || !origin) throw new Error('renderChart: unexpected SVG from vega (no size or origin)');
-  const x = view.scale('x') as (v: number) => number;
-  const y = view.scale('y') as (v: number) => number;
+  // Single-view charts have scales named x and y; faceted ones (one scale per panel) cannot be projected.
+  const x = hasScale(view, 'x') ? (view.scale('x') as (v: number) => number) : null;
+  const y = hasScale(view, 'y') ? (view.scale('y') as (v: number) => number) : null;
   const ox = Number(origin[1]);
   const oy = Number(origin[2]);
   return {
     svg,
     width: Number(size[1]),
     height: Number(size[2]),
-    project: (vx, vy) => [ox + x(vx), oy + y(vy)],
+    project: (vx, vy) => {
+      if (!x || !y) throw new Error('renderChart: this chart has no single x and y scale to project onto');
+      return [ox + x(vx), oy + y(vy)];
+    },
   };
 }

@@ -1,11 +1,17 @@
-// Every family chart spec compiles with vega-lite (no warnings) and renders with vega to SVG; the marker
-// position computed from the chart's own scales lands inside the picture.
+// Every family chart spec (the hold-radius one included) and the orbit page's section plot compile with
+// vega-lite (no warnings) and render with vega to SVG; the marker position computed from the chart's own
+// scales lands inside the picture; the section plot drawn at build as plain SVG puts its marks where vega
+// puts them.
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { compile } from 'vega-lite';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { familyChartSpecs } from '../../site/charts/family-charts.ts';
+import { familyChartSpecs, holdRadiusChartSpec } from '../../site/charts/family-charts.ts';
+import { niceTicks } from '../../site/charts/nice-ticks.ts';
+import { orbitPageData } from '../../site/lib/orbit-page-data.ts';
+import { holdRadiusChartInput } from '../../site/lib/hold-radius-chart-input.ts';
+import { sectionPlotOf } from '../../site/lib/section-plot-of-orbit.ts';
 import { symlogTicks } from '../../site/charts/chart-style.ts';
 import { readCatalogSnapshot, type CatalogSnapshot } from '../../site/lib/catalog-source.ts';
 import { familyChartInput } from '../../site/lib/family-chart-input.ts';
@@ -66,6 +72,87 @@ describe('family charts', () => {
         expect(y).toBeLessThan(stability.height);
       }
     }
+  });
+
+  it('the hold-radius chart of each screened family compiles, renders, links every screened member and places it in its window', async () => {
+    let families = 0;
+    for (const family of catalog.families) {
+      const input = holdRadiusChartInput(catalog, family.id);
+      const rows = catalog.holdRadiiByFamily.get(family.id) ?? [];
+      if (rows.length === 0) {
+        expect(input).toBeNull();
+        continue;
+      }
+      families++;
+      expect(input!.points.map((p) => p.holdKm)).toEqual(rows.map((r) => r.holdRadiusKm));
+      // each point's window is the stable window whose arclength span holds the member
+      const windows = catalog.windowsByFamily.get(family.id) ?? [];
+      for (const p of input!.points) {
+        const orbit = catalog.orbitById.get(p.id)!;
+        if (p.window === null) expect(windows.every((w) => orbit.arclength < w.fromArclength || orbit.arclength > w.toArclength)).toBe(true);
+        else {
+          expect(orbit.arclength).toBeGreaterThanOrEqual(windows[p.window].fromArclength);
+          expect(orbit.arclength).toBeLessThanOrEqual(windows[p.window].toArclength);
+        }
+      }
+      const chart = holdRadiusChartSpec(input!);
+      const warnings: string[] = [];
+      compile(chart.spec as never, { logger: collectingLogger(warnings) as never });
+      expect(warnings).toEqual([]);
+      const rendered = await renderChart(chart.spec);
+      const links = rendered.svg.match(/<a [^>]*href="[^"]*\/orbit\/[^"]*"/g) ?? [];
+      expect(links.length).toBe(rows.length);
+      expect(chart.text).toMatch(/^Hold radius against minimum altitude/);
+      expect(chart.text).toContain(`${rows.length} member${rows.length === 1 ? '' : 's'} with a hold radius`);
+    }
+    expect(families).toBe(2);
+  });
+
+  it("the section plot's spec compiles and renders, and the build's plain SVG puts the marks where vega puts them", async () => {
+    const screened = catalog.holdRadii.slice(0, 4);
+    expect(screened.length).toBe(4);
+    for (const row of screened) {
+      const page = orbitPageData(catalog, row.orbitId);
+      const plot = sectionPlotOf(page.screening.holdRadius!, `member #${page.orbit.seq}`);
+      const warnings: string[] = [];
+      compile(plot.spec as never, { logger: collectingLogger(warnings) as never });
+      expect(warnings).toEqual([]);
+      const rendered = await renderChart(plot.spec);
+      expect(rendered.svg).toContain('x on the section, rotating frame (km from the barycentre)');
+      expect(rendered.svg).toContain('ẋ on the section (m/s)');
+      // Same data window: pixel offsets between marks agree (vega's plot origin differs from ours).
+      const f = plot.input.fixedPoint;
+      const [vx0, vy0] = rendered.project(f.xKm, f.vxMS);
+      const [vx1] = rendered.project(f.xKm + plot.input.holdRadiusKm, f.vxMS);
+      const p = plot.input.points[3];
+      const [vpx, vpy] = rendered.project(p.xKm, p.vxMS);
+      const { figure } = plot;
+      expect(figure.radius!.x2 - figure.radius!.x1).toBeCloseTo(vx1 - vx0, 0);
+      const drawn = /M([\d.]+) ([\d.]+)h0/g;
+      const marks = [...figure.pointsD.matchAll(drawn)].map((m) => [Number(m[1]), Number(m[2])]);
+      expect(marks.length).toBe(plot.input.points.length);
+      expect(marks[3][0] - figure.fixed[0]).toBeCloseTo(vpx - vx0, 0);
+      expect(marks[3][1] - figure.fixed[1]).toBeCloseTo(vpy - vy0, 0);
+      // the ticks drawn are the values vega labels
+      expect(figure.xTicks.length).toBe(niceTicks(...(plot.spec.layer as Array<{ encoding: { x: { scale: { domain: [number, number] } } } }>)[0].encoding.x.scale.domain, 4).length);
+      expect(plot.text).toContain(`${plot.input.points.length} stored points`);
+    }
+  });
+
+  it('a zero hold radius with no stored curve (what an orbit at the edge of stability gets) still compiles and draws the fixed point', async () => {
+    const plot = sectionPlotOf({
+      holdRadiusKm: 0, holdRadiusNd: 0, failingDisplacementKm: 0.4, returns: 200, rotationPerReturnDeg: null,
+      fixedPoint: { xKm: 321_456.7, vxMS: 0 }, points: [],
+    }, 'member #7');
+    const warnings: string[] = [];
+    compile(plot.spec as never, { logger: collectingLogger(warnings) as never });
+    expect(warnings).toEqual([]);
+    const rendered = await renderChart(plot.spec);
+    expect(rendered.svg).toContain('<path');
+    expect(plot.figure.radius).toBeNull();
+    expect(plot.figure.pointsD).toBe('');
+    expect(plot.figure.xTicks.length).toBeGreaterThanOrEqual(2);
+    expect(plot.text).toMatch(/No curve points are stored\.$/);
   });
 
   it('symlog ticks cover ν from 1e-1 to 1e8 with 0 and ±1 (the stable band edges)', () => {

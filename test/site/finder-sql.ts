@@ -26,6 +26,16 @@ export function finderSql(filter: FinderFilter): { sql: string; params: unknown[
   if (filter.secondaryAltKmMax !== null) add('o.secondary_min_alt_km <= ?', filter.secondaryAltKmMax);
   if (filter.lock === 'any') add('o.synodic_p IS NOT NULL AND o.synodic_q IS NOT NULL');
   else if (filter.lock !== null) add("(o.synodic_p || ':' || o.synodic_q) = ?", filter.lock);
-  const sql = `SELECT o.id FROM orbits o JOIN families f ON f.id = o.family_id${where.length ? ` WHERE ${where.join(' AND ')}` : ''} ORDER BY o.family_id, o.seq`;
+  // Screening bounds: an unscreened orbit has NULL there, and NULL >= x is not true, so it drops out.
+  if (filter.holdKmMin !== null) add('h.hold_radius_km >= ?', filter.holdKmMin);
+  if (filter.sunFractionMin !== null) add('sb.surviving_fraction >= ?', filter.sunFractionMin);
+  if (filter.eccFractionMin !== null) add('se.surviving_fraction >= ?', filter.eccFractionMin);
+  const joins = [
+    'JOIN families f ON f.id = o.family_id',
+    'LEFT JOIN hold_radii h ON h.orbit_id = o.id',
+    "LEFT JOIN model_screenings sb ON sb.orbit_id = o.id AND sb.model = 'bicircular'",
+    "LEFT JOIN model_screenings se ON se.orbit_id = o.id AND se.model = 'elliptic'",
+  ].join(' ');
+  const sql = `SELECT o.id FROM orbits o ${joins}${where.length ? ` WHERE ${where.join(' AND ')}` : ''} ORDER BY o.family_id, o.seq`;
   return { sql, params };
 }

@@ -58,6 +58,11 @@ const cases: Array<[string, Partial<FinderFilter>]> = [
   ['lock 1:1', { lock: '1:1' }],
   ['combined', { system: 'earth-moon', stableOnly: true, jacobiMin: 3.03, secondaryAltKmMax: 20_000, vertical: 'stable' }],
   ['unknown family', { family: 'no/such/family' }],
+  ['hold radius at least 300 km', { holdKmMin: 300 }],
+  ['hold radius at least 0 km (screened members only)', { holdKmMin: 0 }],
+  ['Sun survival at least 0.5', { sunFractionMin: 0.5 }],
+  ['eccentricity survival at least 0.6', { eccFractionMin: 0.6 }],
+  ['hold radius, both survivals and a family', { family: 'earth-moon/E2M1/a', holdKmMin: 100, sunFractionMin: 0.25, eccFractionMin: 0.25 }],
 ];
 
 describe('finder filter against SQLite', () => {
@@ -71,7 +76,41 @@ describe('finder filter against SQLite', () => {
     const counts = cases.map(([, partial]) => sqlIds({ ...EMPTY_FILTER, ...partial }).length);
     const total = sqlIds(EMPTY_FILTER).length;
     expect(total).toBe(301);
-    expect(counts.filter((c) => c > 0 && c < total).length).toBeGreaterThanOrEqual(10);
+    expect(counts.filter((c) => c > 0 && c < total).length).toBeGreaterThanOrEqual(14);
+    // the screening bounds keep some screened members and drop others (SYNTHETIC screenings)
+    const screened = sqlIds({ ...EMPTY_FILTER, holdKmMin: 0 }).length;
+    for (const partial of [{ holdKmMin: 300 }, { sunFractionMin: 0.5 }, { eccFractionMin: 0.6 }]) {
+      const n = sqlIds({ ...EMPTY_FILTER, ...partial }).length;
+      expect(n).toBeGreaterThan(0);
+      expect(n).toBeLessThan(screened);
+    }
+    expect(screened).toBeLessThan(sqlIds({ ...EMPTY_FILTER, stableOnly: true }).length);
+  });
+
+  it('sorting by hold radius keeps unscreened orbits last in both directions', () => {
+    for (const direction of ['asc', 'desc'] as const) {
+      const order = Array.from(sortOrder(table, 'holdKm', direction));
+      const firstUnscreened = order.findIndex((i) => Number.isNaN(table.holdKm[i]));
+      expect(firstUnscreened).toBeGreaterThan(0);
+      expect(order.slice(firstUnscreened).every((i) => Number.isNaN(table.holdKm[i]))).toBe(true);
+      const values = order.slice(0, firstUnscreened).map((i) => table.holdKm[i]);
+      expect(values).toEqual([...values].sort((a, b) => (direction === 'asc' ? a - b : b - a)));
+    }
+  });
+
+  it('carries hold radius and survival fractions exactly as stored', () => {
+    const rows = db.prepare(`SELECT o.id, h.hold_radius_km AS hold, sb.surviving_fraction AS sun, se.surviving_fraction AS ecc
+      FROM orbits o LEFT JOIN hold_radii h ON h.orbit_id = o.id
+      LEFT JOIN model_screenings sb ON sb.orbit_id = o.id AND sb.model = 'bicircular'
+      LEFT JOIN model_screenings se ON se.orbit_id = o.id AND se.model = 'elliptic'`).all() as Array<{ id: string; hold: number | null; sun: number | null; ecc: number | null }>;
+    const index = new Map(table.ids.map((id, i) => [id, i]));
+    const orNaN = (v: number | null) => (v === null ? NaN : v);
+    for (const row of rows) {
+      const i = index.get(row.id)!;
+      expect(table.holdKm[i]).toBe(orNaN(row.hold));
+      expect(table.sun[i]).toBe(orNaN(row.sun));
+      expect(table.ecc[i]).toBe(orNaN(row.ecc));
+    }
   });
 
   it('sorting by a column gives that column in order', () => {
@@ -102,7 +141,8 @@ describe('finder URL state', () => {
       filter: {
         system: 'earth-moon', family: 'a/b "c" & d', signature: 'E2M1', jacobiMin: 3.01, jacobiMax: 3.2, periodDaysMin: 10,
         periodDaysMax: 60.5, stableOnly: true, nuAbsMax: 1e3, vertical: 'unstable', primaryAltKmMin: 0, primaryAltKmMax: 1e5,
-        secondaryAltKmMin: 100, secondaryAltKmMax: 2e4, lock: '3:2',
+        secondaryAltKmMin: 100, secondaryAltKmMax: 2e4, lock: '3:2', holdKmMin: 250.5, sunFractionMin: 0.75,
+        eccFractionMin: 0.125,
       },
       sort: 'nu',
       direction: 'desc',

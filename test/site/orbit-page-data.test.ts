@@ -95,6 +95,78 @@ describe('orbit page data', () => {
     expect(orbitPageData(catalog, arenstorf!.id).family.name).toBe(HOSTILE_TEXT);
   });
 
+  it('shows the hold radius and screenings the database holds, converted in SQL, and nothing for unscreened members', () => {
+    // Rows straight from SQLite; km and m/s conversions of the section points done in SQL (json_each).
+    const holds = db.prepare(`SELECT h.*, s.length_unit_km AS lu, s.time_unit_s AS tu, json_extract(o.state0, '$[0]') * s.length_unit_km AS fx_km,
+        json_extract(o.state0, '$[3]') * s.length_unit_km / s.time_unit_s * 1000 AS fvx_ms
+      FROM hold_radii h JOIN orbits o ON o.id = h.orbit_id JOIN families f ON f.id = o.family_id JOIN systems s ON s.id = f.system_id`).all() as Array<Record<string, number | string | null>>;
+    const points = db.prepare(`SELECT x.value * s.length_unit_km AS x_km, v.value * s.length_unit_km / s.time_unit_s * 1000 AS vx_ms
+      FROM hold_radii h JOIN orbits o ON o.id = h.orbit_id JOIN families f ON f.id = o.family_id JOIN systems s ON s.id = f.system_id,
+        json_each(h.curve_x) x JOIN json_each(h.curve_vx) v ON v.key = x.key
+      WHERE h.orbit_id = ? ORDER BY x.key`);
+    const screenings = db.prepare(`SELECT * FROM model_screenings ORDER BY orbit_id, model`).all() as Array<Record<string, number | string>>;
+    expect(holds.length).toBeGreaterThan(5);
+    expect(screenings.length).toBeGreaterThan(holds.length);
+    for (const row of holds) {
+      const page = orbitPageData(catalog, String(row.orbit_id));
+      expect(page.orbit.stable).toBe(true); // only stable members are screened
+      const h = page.screenings?.holdRadius;
+      expect(h?.holdRadiusKm).toBe(row.hold_radius_km);
+      expect(h?.holdRadiusNd).toBe(row.hold_radius_nd);
+      expect(h?.failingDisplacementKm).toBe(row.failing_displacement_km);
+      expect(h?.returns).toBe(row.returns);
+      expect(h?.rotationPerReturnRad).toBe(row.rotation_per_return_rad);
+      expect(h?.curveX).toEqual(JSON.parse(String(row.curve_x)));
+      const view = page.screening.holdRadius!;
+      expect(view.holdRadiusKm).toBe(row.hold_radius_km);
+      expect(view.fixedPoint.xKm).toBeCloseTo(Number(row.fx_km), 9);
+      expect(view.fixedPoint.vxMS).toBeCloseTo(Number(row.fvx_ms), 9);
+      const sqlPoints = points.all(row.orbit_id) as Array<{ x_km: number; vx_ms: number }>;
+      expect(view.points.length).toBe(sqlPoints.length);
+      view.points.forEach((p, i) => {
+        expect(p.xKm).toBeCloseTo(sqlPoints[i].x_km, 9);
+        expect(p.vxMS).toBeCloseTo(sqlPoints[i].vx_ms, 9);
+      });
+    }
+    for (const row of screenings) {
+      const page = orbitPageData(catalog, String(row.orbit_id));
+      const model = row.model as 'bicircular' | 'elliptic';
+      const stored = page.screenings?.[model];
+      expect(stored?.survivingFraction).toBe(row.surviving_fraction);
+      expect(stored?.spanNd).toBe(row.span_nd);
+      expect(stored?.firstBrokenPeriods).toEqual(JSON.parse(String(row.first_broken_periods)));
+      expect(stored?.parameters).toEqual(JSON.parse(String(row.parameters)));
+      const view = page.screening.models.find((m) => m.model === model)!;
+      expect(view.survivingFraction).toBe(row.surviving_fraction);
+      expect(view.phaseCount).toBe(row.phases);
+      const phases = JSON.parse(String(row.phase_rad)) as number[];
+      const broken = JSON.parse(String(row.first_broken_periods)) as Array<number | null>;
+      const departures = JSON.parse(String(row.max_departure_km)) as number[];
+      expect(view.rows.map((r) => r.phaseDeg)).toEqual(phases.map((p) => (p * 180) / Math.PI));
+      expect(view.rows.map((r) => r.firstBrokenPeriod)).toEqual(broken);
+      // the row stores 0 for a phase whose first period broke (no period held); the page says so instead
+      expect(view.rows.map((r) => r.maxDepartureKm)).toEqual(departures.map((d, i) => (broken[i] === 1 ? null : d)));
+      expect(view.survivingPhases / view.phaseCount).toBe(row.surviving_fraction);
+    }
+    // screened in the models without a hold radius (the generator computes it for a few members per window)
+    const withoutHold = screenings.filter((m) => !holds.some((h) => h.orbit_id === m.orbit_id));
+    expect(withoutHold.length).toBeGreaterThan(0);
+    for (const m of withoutHold) {
+      const page = orbitPageData(catalog, String(m.orbit_id));
+      expect(page.screening.screened).toBe(true);
+      expect(page.screening.holdRadius).toBeNull();
+    }
+    // every other orbit: no rows in the database and "not screened" on the page
+    const screenedIds = new Set([...holds.map((h) => h.orbit_id), ...screenings.map((m) => m.orbit_id)]);
+    const unscreened = (db.prepare('SELECT id, stable FROM orbits').all() as Array<{ id: string; stable: number }>).filter((o) => !screenedIds.has(o.id));
+    expect(unscreened.some((o) => o.stable === 1)).toBe(true); // a stable member the run left unscreened
+    for (const o of unscreened) {
+      const page = orbitPageData(catalog, o.id);
+      expect(page.screenings).toBeNull();
+      expect(page.screening).toEqual({ screened: false, holdRadius: null, models: [] });
+    }
+  });
+
   it('fails with a one-line error for an unknown orbit', () => {
     expect(() => orbitPageData(catalog, 'no/such/orbit')).toThrow(/orbit "no\/such\/orbit" is not in the catalog/);
   });

@@ -1,13 +1,18 @@
 // The built site in a real browser (Debian's chromium through playwright-core), served from 127.0.0.1
-// under a base path. Builds its own small catalog: synthetic families for the non-physics checks and the
-// Arenstorf orbit (Hairer, Nørsett & Wanner 1993, §II.0) for the closure check.
+// under a base path. Builds its own small catalog: synthetic families (with synthetic screenings) for the
+// non-physics checks and the Arenstorf orbit (Hairer, Nørsett & Wanner 1993, §II.0) for the closure check
+// and the epoch-dated download, whose states are checked against the core map fed by astronomy-engine in Node.
 import Database from 'better-sqlite3';
 import { mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { GeoMoonState, KM_PER_AU } from 'astronomy-engine';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { rotatingToInertialAtEpoch } from '../../generator/core/beyond/rotating-to-inertial-at-epoch.ts';
+import { sampleTrajectory } from '../../generator/core/propagation/sample-trajectory.ts';
 import { idToPath } from '../../site/lib/id-path.ts';
+import { DOWNLOAD_TOLERANCE } from '../../site/scripts/state-vectors/state-series.ts';
 import { queryToState } from '../../site/scripts/finder/finder-query.ts';
 import { buildSite, REPO_ROOT } from './build-site.ts';
 import { finderSql } from './finder-sql.ts';
@@ -73,6 +78,7 @@ describe('built site in chromium', () => {
       ['finder', 'finder/'],
       ['family', familyPath('earth-moon/E1M1/a')],
       ['orbit', orbitPath(arenstorfId)],
+      ['orbit-screened', orbitPath(screenedOrbit().orbit_id)],
     ];
     for (const [name, path] of pages) {
       const page = await open(path);
@@ -221,13 +227,150 @@ describe('built site in chromium', () => {
   it('reads fine with JavaScript off', async () => {
     const noScript = await browser.newContext({ javaScriptEnabled: false });
     const family = await open(familyPath('earth-moon/E1M1/a'), noScript);
-    expect(await family.locator('.chart-host svg').count()).toBe(4);
+    expect(await family.locator('#family-charts .chart-host svg').count()).toBe(5); // four + hold radius
+    const screened = await open(orbitPath(screenedOrbit().orbit_id), noScript);
+    expect(await screened.locator('#section-plot svg path').count()).toBeGreaterThan(3);
     const orbit = await open(orbitPath(arenstorfId), noScript);
     expect(await orbit.locator('.plots svg').count()).toBe(3);
     expect(await orbit.locator('#initial-state-download').getAttribute('href')).toMatch(/^data:application\/json/);
     const finder = await open('finder/', noScript);
     expect(await finder.locator('#finder-rows tr').count()).toBe(41);
     await noScript.close();
+  });
+
+  it("a screened member's page shows its hold radius, section plot and screenings as stored; an unscreened one says so", async () => {
+    const row = screenedOrbit();
+    const db = new Database(dbPath, { readonly: true });
+    const screenings = db.prepare('SELECT * FROM model_screenings WHERE orbit_id = ? ORDER BY model').all(row.orbit_id) as Array<Record<string, string | number>>;
+    db.close();
+    expect(screenings.map((m) => m.model)).toEqual(['bicircular', 'elliptic']);
+    const page = await open(orbitPath(row.orbit_id));
+    const km = Number((await page.locator('[data-field="holdRadiusKm"]').innerText()).replace(/[^\d.]/g, ''));
+    expect(Math.abs(km - row.hold_radius_km)).toBeLessThanOrEqual(0.05);
+    expect(await page.locator('[data-field="curvePoints"]').innerText()).toBe(String(JSON.parse(row.curve_x).length));
+    for (const m of screenings) {
+      const block = page.locator(`.screening[data-model="${m.model}"]`);
+      expect(await block.locator('[data-field="survivingFraction"]').getAttribute('data-value')).toBe(String(m.surviving_fraction));
+      const broken = JSON.parse(String(m.first_broken_periods)) as Array<number | null>;
+      const cells = await block.locator('tbody tr td:nth-child(2)').allInnerTexts();
+      expect(cells).toEqual(broken.map((p) => (p === null ? 'held for the whole span' : `period ${p}`)));
+      const phases = await block.locator('tbody tr td:nth-child(1)').allInnerTexts();
+      expect(phases.map(Number)).toEqual((JSON.parse(String(m.phase_rad)) as number[]).map((r) => Number(((r * 180) / Math.PI).toFixed(1))));
+    }
+    const plot = page.locator('#section-plot [role="img"]');
+    expect(await plot.getAttribute('aria-label')).toMatch(/^Return-map section of member #\d+, x against ẋ\. Fixed point/);
+    // the interactive version (vega, bundled) replaces the build's SVG once the figure is in view
+    await plot.scrollIntoViewIfNeeded();
+    await expect.poll(() => plot.getAttribute('data-interactive')).toBe('true');
+    expect(await plot.locator('svg text', { hasText: 'ẋ on the section (m/s)' }).count()).toBe(1);
+    await page.close();
+
+    const unscreened = await open(orbitPath(arenstorfId));
+    expect(await unscreened.locator('#screening').getAttribute('data-screened')).toBe('false');
+    expect(await unscreened.locator('#screening-status').innerText()).toMatch(/^Not screened\. Only in-plane stable members get a hold radius/);
+    await unscreened.close();
+  });
+
+  it('a family page charts the hold radius and lists its branch points of spatial families with working links', async () => {
+    const page = await open(familyPath('earth-moon/E1M1/a'));
+    await page.waitForSelector('[data-chart-key="hold"][data-interactive="true"]');
+    expect(await page.locator('[data-chart-key="hold"]').getAttribute('aria-label')).toMatch(/^Hold radius against minimum altitude/);
+    const items = page.locator('#branch-point-list li');
+    expect(await items.count()).toBe(2);
+    expect(await items.nth(0).innerText()).toMatch(/^ν_z = \+1 \(tangent\)/);
+    expect(await items.nth(1).innerText()).toMatch(/^ν_z = −1 \(period-doubling\)/);
+    const hrefs = await page.locator('#branch-point-list a').evaluateAll((links) => links.map((a) => (a as HTMLAnchorElement).href));
+    expect(hrefs.length).toBe(3); // the member at the first, the two members around the second
+    for (const href of hrefs) expect((await context.request.get(href)).status()).toBe(200);
+    await page.close();
+  });
+
+  it('the finder filters by hold radius and survival as the same SQL query does, and saves those columns', async () => {
+    const query = 'hmin=300&sunmin=0.5';
+    const page = await open(`finder/?${query}`);
+    await page.waitForSelector('#finder[data-ready="true"]');
+    const db = new Database(dbPath, { readonly: true });
+    try {
+      const expectIds = (q: string) => {
+        const { sql, params } = finderSql(queryToState(q).filter);
+        return (db.prepare(sql).all(...params) as Array<{ id: string }>).map((r) => r.id);
+      };
+      const expected = expectIds(query);
+      expect(expected.length).toBeGreaterThan(0);
+      expect(expected.length).toBeLessThan(expectIds('hmin=0').length);
+      expect(await page.locator('#finder-count').getAttribute('data-count')).toBe(String(expected.length));
+      expect(await page.inputValue('input[name="hmin"]')).toBe('300');
+      const csv = (await downloadText(page, () => page.click('#finder-csv'))).trim().split('\r\n');
+      const header = csv[0].split(',');
+      const col = (name: string) => header.indexOf(name);
+      expect(col('hold_radius_km')).toBeGreaterThan(0);
+      const stored = db.prepare(`SELECT h.hold_radius_km AS hold, sb.surviving_fraction AS sun, se.surviving_fraction AS ecc FROM orbits o
+        LEFT JOIN hold_radii h ON h.orbit_id = o.id LEFT JOIN model_screenings sb ON sb.orbit_id = o.id AND sb.model = 'bicircular'
+        LEFT JOIN model_screenings se ON se.orbit_id = o.id AND se.model = 'elliptic' WHERE o.id = ?`);
+      const text = (v: number | null) => (v === null ? '' : String(v));
+      for (const line of csv.slice(1)) {
+        const cells = line.split(',');
+        const dbRow = stored.get(cells[0]) as { hold: number | null; sun: number | null; ecc: number | null };
+        expect(cells[col('hold_radius_km')]).toBe(text(dbRow.hold));
+        expect(cells[col('sun_surviving_fraction')]).toBe(text(dbRow.sun));
+        expect(cells[col('eccentricity_surviving_fraction')]).toBe(text(dbRow.ecc));
+      }
+      const json = JSON.parse(await downloadText(page, () => page.click('#finder-json')));
+      expect(json.orbits.map((o: { id: string }) => o.id)).toEqual(expected);
+      expect(json.orbits.every((o: { holdRadiusKm: number }) => o.holdRadiusKm >= 300)).toBe(true);
+
+      // typing an eccentricity bound narrows at once and the URL keeps it (pass times: bench/site-build.ts)
+      await page.fill('input[name="eccmin"]', '0.4');
+      const typed = expectIds(`${query}&eccmin=0.4`);
+      await expect.poll(() => page.locator('#finder-count').getAttribute('data-count')).toBe(String(typed.length));
+      expect(new URL(page.url()).searchParams.get('eccmin')).toBe('0.4');
+    } finally {
+      db.close();
+    }
+    await page.close();
+  });
+
+  it('an epoch-dated EME2000 OEM equals the core map fed by astronomy-engine in Node at the same epochs (1e-6 km)', async () => {
+    const page = await open(orbitPath(arenstorfId));
+    // a date-time field keeps what Chrome's value normalisation leaves (".25", no trailing zero)
+    const start = '2031-02-11T18:00:30.25';
+    await page.selectOption('select[name="frame"]', 'eme2000');
+    await page.fill('input[name="epoch"]', start);
+    expect(await page.inputValue('input[name="epoch"]')).toBe(start);
+    await page.fill('input[name="periods"]', '1');
+    await page.selectOption('select[name="stepUnit"]', 'tu');
+    await page.fill('input[name="step"]', String(ARENSTORF.periodNd / 40));
+    const oem = parseOem(await downloadText(page, () => page.click('button[data-format="oem"]')));
+    expect(oem.meta.REF_FRAME).toBe('EME2000');
+    expect(oem.meta.CENTER_NAME).toBe('EARTH');
+    expect(oem.meta.TIME_SYSTEM).toBe('UTC');
+    expect(oem.comments.join(' ')).toMatch(/instantaneous Earth-Moon distance and rate from the astronomy-engine ephemeris/);
+    expect(oem.epochs[0]).toBe('2031-02-11T18:00:30.250000');
+    expect(oem.states.length).toBe(41);
+    // Node: the same samples (same propagator and tolerance) mapped at each epoch read from the file.
+    const samples = sampleTrajectory(ARENSTORF.mu, [ARENSTORF.x0, 0, 0, 0, ARENSTORF.vy0, 0], ARENSTORF.periodNd, 41, DOWNLOAD_TOLERANCE);
+    for (const i of [0, 17, 40]) {
+      const [date, frac] = oem.epochs[i].split('.');
+      const micros = Date.parse(`${date}Z`) * 1000 + Number(frac);
+      const s = GeoMoonState((micros - Date.UTC(2000, 0, 1, 12) * 1000) / 86_400_000_000);
+      const moon = {
+        moonPositionKm: [s.x * KM_PER_AU, s.y * KM_PER_AU, s.z * KM_PER_AU],
+        moonVelocityKmS: [s.vx, s.vy, s.vz].map((v) => (v * KM_PER_AU) / 86_400),
+      };
+      const expected = rotatingToInertialAtEpoch(samples.states.subarray(6 * i, 6 * i + 6), { mu: ARENSTORF.mu, ...moon });
+      for (let k = 0; k < 3; k++) {
+        expect(Math.abs(oem.states[i][k] - expected.positionKm[k]), `sample ${i} x${k}`).toBeLessThan(1e-6);
+        expect(Math.abs(oem.states[i][3 + k] - expected.velocityKmS[k]), `sample ${i} v${k}`).toBeLessThan(1e-9);
+      }
+    }
+    // the CSV of the same request carries the same epochs and states
+    const csv = (await downloadText(page, () => page.click('button[data-format="csv"]'))).trim().split('\n');
+    expect(csv[0]).toBe('epoch_utc,t_s,x_km,y_km,z_km,vx_km_s,vy_km_s,vz_km_s');
+    const last = csv[41].split(',');
+    expect(last[0]).toBe(oem.epochs[40]);
+    expect(last.slice(2).map(Number)).toEqual(oem.states[40]);
+    expect(await page.locator('[data-role="download-note"]').innerText()).toMatch(/^41 states/);
+    await page.close();
   });
 
   it('no request left 127.0.0.1', () => {
@@ -237,6 +380,17 @@ describe('built site in chromium', () => {
     expect(pageErrors).toEqual([]);
   });
 });
+
+/** A synthetic family member with a hold radius and both screenings. */
+function screenedOrbit(): { orbit_id: string; hold_radius_km: number; curve_x: string } {
+  const db = new Database(dbPath, { readonly: true });
+  try {
+    return db.prepare(`SELECT h.orbit_id, h.hold_radius_km, h.curve_x FROM hold_radii h
+      WHERE (SELECT count(*) FROM model_screenings m WHERE m.orbit_id = h.orbit_id) = 2 ORDER BY h.orbit_id LIMIT 1`).get() as never;
+  } finally {
+    db.close();
+  }
+}
 
 function queryFamilyId(): string {
   return arenstorfId.slice(0, arenstorfId.lastIndexOf('/'));

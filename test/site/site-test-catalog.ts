@@ -1,5 +1,6 @@
 // The small catalog the site tests build from:
-// - two SYNTHETIC families (test/fixtures/synthetic-catalog.ts: invented rows, for non-physics checks only);
+// - two SYNTHETIC families (test/fixtures/synthetic-catalog.ts: invented rows, for non-physics checks only),
+//   their stable members given SYNTHETIC hold radii and screenings (synthetic-screenings.ts), most of them;
 // - one real periodic orbit written as a one-orbit family: the Arenstorf orbit of Hairer, Nørsett & Wanner,
 //   Solving ODEs I (2nd ed. 1993), §II.0: μ = 0.012277471, start (0.994, 0), velocity
 //   (0, −2.00158510637908252240537862224), period T = 17.0652165601579625588917206249. Its row is analysed
@@ -11,6 +12,7 @@ import { orbitRowOf } from '../../generator/core/orbits/build-family-bundle.ts';
 import { openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
 import type { FamilyBundle, SystemRow } from '../../catalog-db/types.ts';
 import { writeSyntheticCatalog } from '../fixtures/synthetic-catalog.ts';
+import { addSyntheticScreenings } from './synthetic-screenings.ts';
 
 export const ARENSTORF = {
   mu: 0.012277471,
@@ -48,6 +50,7 @@ export interface SiteTestCatalog {
 
 export function writeSiteTestCatalog(path: string, synthetic = { orbitCount: 40, familyCount: 2 }): SiteTestCatalog {
   writeSyntheticCatalog(path, synthetic);
+  addSyntheticScreenings(path);
   const writer = openCatalogForWrite(path);
   try {
     writer.setScenario({ name: HOSTILE_SCENARIO, description: `Site test catalog. ${HOSTILE_TEXT}`, team: 'Site tests "team" <i>x</i>' });

@@ -13,7 +13,7 @@ import { ARENSTORF } from './site-test-catalog.ts';
 const orbit: OrbitDownloadData = {
   orbitId: 'test/arenstorf/0000', familyName: 'Arenstorf', systemName: 'Earth–Moon (HNW μ)', mu: ARENSTORF.mu,
   lengthUnitKm: 384_400, timeUnitS: 375_190.262, primaryName: 'Earth', secondaryName: 'Moon',
-  state0: [ARENSTORF.x0, 0, 0, 0, ARENSTORF.vy0, 0], periodNd: ARENSTORF.periodNd, fileStem: 'arenstorf',
+  state0: [ARENSTORF.x0, 0, 0, 0, ARENSTORF.vy0, 0], periodNd: ARENSTORF.periodNd, fileStem: 'arenstorf', earthMoon: true,
 };
 
 describe('state series', () => {

@@ -12,6 +12,11 @@ import { saveTextFile } from '../save-text-file.ts';
 
 const PAGE_SIZE = 50;
 
+/** A surviving fraction as a whole percent; a dash for an unscreened orbit (NaN). */
+export function formatPercent(fraction: number): string {
+  return Number.isNaN(fraction) ? '—' : `${formatFixed(fraction * 100, 0)} %`;
+}
+
 function el<K extends keyof HTMLElementTagNameMap>(tag: K, text?: string, className?: string): HTMLElementTagNameMap[K] {
   const node = document.createElement(tag);
   if (text !== undefined) node.textContent = text;
@@ -96,6 +101,9 @@ export async function startFinder(root: HTMLElement): Promise<void> {
         el('td', formatFixed(table.secondaryAltKm[i], 0), 'r num'),
         el('td', lock, 'r num'),
         el('td', table.stable[i] ? 'stable' : 'unstable', table.stable[i] ? 'tag-cell stable' : 'tag-cell unstable'),
+        el('td', formatFixed(table.holdKm[i], 1), 'r num'),
+        el('td', formatPercent(table.sun[i]), 'r num'),
+        el('td', formatPercent(table.ecc[i]), 'r num'),
       );
       fragment.append(tr);
     }

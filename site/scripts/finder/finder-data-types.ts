@@ -1,7 +1,7 @@
 // The finder's data asset (data/finder.json): one column per field, row i = orbit i. Shared by the build
 // (which writes it) and the browser (which reads it into typed arrays).
 
-export const FINDER_DATA_VERSION = 1;
+export const FINDER_DATA_VERSION = 2;
 
 export interface FinderSystem {
   id: string;
@@ -38,5 +38,10 @@ export interface FinderDataFile {
     stable: number[]; // 1 stable (in-plane), 0 not
     lock: number[]; // index into locks, −1 for none
     lockRelError: (number | null)[];
+    /** Hold radius (km) of screened members, null for the others. */
+    holdKm: (number | null)[];
+    /** Surviving fraction (0..1) of the Sun (bicircular) and eccentricity (elliptic) screenings, null: not screened. */
+    sun: (number | null)[];
+    ecc: (number | null)[];
   };
 }

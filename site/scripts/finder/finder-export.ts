@@ -16,7 +16,12 @@ export interface FinderExportRow {
   stable: boolean;
   synodicLock: string | null;
   synodicRelError: number | null;
+  holdRadiusKm: number | null;
+  sunSurvivingFraction: number | null;
+  eccentricitySurvivingFraction: number | null;
 }
+
+const nullIfNaN = (v: number) => (Number.isNaN(v) ? null : v);
 
 export function exportRow(table: FinderTable, i: number): FinderExportRow {
   const family = table.meta.families[table.family[i]];
@@ -36,7 +41,10 @@ export function exportRow(table: FinderTable, i: number): FinderExportRow {
     secondaryMinAltKm: table.secondaryAltKm[i],
     stable: table.stable[i] === 1,
     synodicLock: lock < 0 ? null : table.meta.locks[lock],
-    synodicRelError: Number.isNaN(err) ? null : err,
+    synodicRelError: nullIfNaN(err),
+    holdRadiusKm: nullIfNaN(table.holdKm[i]),
+    sunSurvivingFraction: nullIfNaN(table.sun[i]),
+    eccentricitySurvivingFraction: nullIfNaN(table.ecc[i]),
   };
 }
 
@@ -51,7 +59,8 @@ const CSV_COLUMNS: Array<[keyof FinderExportRow, string]> = [
   ['signature', 'lap_signature'], ['jacobi', 'jacobi_constant'], ['periodDays', 'period_days'],
   ['stabilityIndex', 'stability_index'], ['verticalStabilityIndex', 'vertical_stability_index'],
   ['primaryMinAltKm', 'primary_min_alt_km'], ['secondaryMinAltKm', 'secondary_min_alt_km'], ['stable', 'stable'],
-  ['synodicLock', 'synodic_lock'], ['synodicRelError', 'synodic_rel_error'],
+  ['synodicLock', 'synodic_lock'], ['synodicRelError', 'synodic_rel_error'], ['holdRadiusKm', 'hold_radius_km'],
+  ['sunSurvivingFraction', 'sun_surviving_fraction'], ['eccentricitySurvivingFraction', 'eccentricity_surviving_fraction'],
 ];
 
 export function rowsToCsv(table: FinderTable, rows: Int32Array, count: number): string {

@@ -22,12 +22,17 @@ export interface FinderFilter {
   secondaryAltKmMax: number | null;
   /** "p:q", or "any" for every orbit that has a synodic lock. */
   lock: string | null;
+  /** Lower bounds on the screening results; an unscreened orbit fails any of them. */
+  holdKmMin: number | null;
+  sunFractionMin: number | null;
+  eccFractionMin: number | null;
 }
 
 export const EMPTY_FILTER: FinderFilter = {
   system: null, family: null, signature: null, jacobiMin: null, jacobiMax: null, periodDaysMin: null,
   periodDaysMax: null, stableOnly: false, nuAbsMax: null, vertical: 'any', primaryAltKmMin: null,
-  primaryAltKmMax: null, secondaryAltKmMin: null, secondaryAltKmMax: null, lock: null,
+  primaryAltKmMax: null, secondaryAltKmMin: null, secondaryAltKmMax: null, lock: null, holdKmMin: null,
+  sunFractionMin: null, eccFractionMin: null,
 };
 
 const lo = (v: number | null) => (v === null ? -Infinity : v);
@@ -56,8 +61,12 @@ export function filterRows(table: FinderTable, filter: FinderFilter, order: Int3
   const a1Lo = lo(filter.primaryAltKmMin), a1Hi = hi(filter.primaryAltKmMax);
   const a2Lo = lo(filter.secondaryAltKmMin), a2Hi = hi(filter.secondaryAltKmMax);
   const stableOnly = filter.stableOnly;
+  // NaN (not screened) fails `!(v >= bound)`, so these bounds are checked only when set.
+  const useHold = filter.holdKmMin !== null, hLo = lo(filter.holdKmMin);
+  const useSun = filter.sunFractionMin !== null, sunLo = lo(filter.sunFractionMin);
+  const useEcc = filter.eccFractionMin !== null, eccLo = lo(filter.eccFractionMin);
   const vertical = filter.vertical === 'stable' ? 1 : filter.vertical === 'unstable' ? 2 : 0;
-  const { family, familySystem, signature, jacobi, periodDays, nu, nuV, primaryAltKm, secondaryAltKm, stable, lock } = table;
+  const { family, familySystem, signature, jacobi, periodDays, nu, nuV, primaryAltKm, secondaryAltKm, stable, lock, holdKm, sun, ecc } = table;
   const n = order.length;
   let count = 0;
   for (let k = 0; k < n; k++) {
@@ -79,6 +88,9 @@ export function filterRows(table: FinderTable, filter: FinderFilter, order: Int3
     if (a2 < a2Lo || a2 > a2Hi) continue;
     if (anyLock && lock[i] < 0) continue;
     if (useLock && lock[i] !== lockWanted) continue;
+    if (useHold && !(holdKm[i] >= hLo)) continue;
+    if (useSun && !(sun[i] >= sunLo)) continue;
+    if (useEcc && !(ecc[i] >= eccLo)) continue;
     out[count++] = i;
   }
   return count;

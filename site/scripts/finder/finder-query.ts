@@ -14,6 +14,7 @@ export const DEFAULT_STATE: FinderState = { filter: EMPTY_FILTER, sort: 'orbit',
 const NUMBER_PARAMS = {
   cmin: 'jacobiMin', cmax: 'jacobiMax', pmin: 'periodDaysMin', pmax: 'periodDaysMax', nu: 'nuAbsMax',
   a1min: 'primaryAltKmMin', a1max: 'primaryAltKmMax', a2min: 'secondaryAltKmMin', a2max: 'secondaryAltKmMax',
+  hmin: 'holdKmMin', sunmin: 'sunFractionMin', eccmin: 'eccFractionMin',
 } as const satisfies Record<string, keyof FinderFilter>;
 
 const TEXT_PARAMS = { sys: 'system', fam: 'family', sig: 'signature', lock: 'lock' } as const satisfies Record<string, keyof FinderFilter>;

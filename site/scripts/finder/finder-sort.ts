@@ -1,7 +1,9 @@
 // Row orders for the finder's sortable columns (a permutation, recomputed only when the sort changes).
 import type { FinderTable } from './finder-table.ts';
 
-export const SORT_KEYS = ['orbit', 'signature', 'jacobi', 'periodDays', 'nu', 'nuV', 'primaryAltKm', 'secondaryAltKm', 'lock'] as const;
+export const SORT_KEYS = [
+  'orbit', 'signature', 'jacobi', 'periodDays', 'nu', 'nuV', 'primaryAltKm', 'secondaryAltKm', 'lock', 'holdKm', 'sun', 'ecc',
+] as const;
 export type SortKey = (typeof SORT_KEYS)[number];
 export type SortDirection = 'asc' | 'desc';
 
@@ -26,6 +28,14 @@ function compareBy(table: FinderTable, key: SortKey): (a: number, b: number) => 
       const value = (i: number) => (table.lock[i] < 0 ? Infinity : ratio[table.lock[i]]);
       return (a, b) => value(a) - value(b) || a - b;
     }
+    case 'holdKm':
+    case 'sun':
+    case 'ecc': {
+      // unscreened orbits (NaN) after every screened one
+      const column = table[key];
+      const value = (i: number) => (Number.isNaN(column[i]) ? Infinity : column[i]);
+      return (a, b) => value(a) - value(b) || a - b;
+    }
     default: {
       const column = table[key];
       return (a, b) => column[a] - column[b] || a - b;
@@ -36,8 +46,10 @@ function compareBy(table: FinderTable, key: SortKey): (a: number, b: number) => 
 export function sortOrder(table: FinderTable, key: SortKey, direction: SortDirection): Int32Array {
   const order = Array.from({ length: table.n }, (_, i) => i);
   const compare = compareBy(table, key);
-  // Descending reverses the values; orbits without a synodic lock stay last either way.
-  const lockless = (i: number) => (key === 'lock' && table.lock[i] < 0 ? 1 : 0);
+  // Descending reverses the values; orbits without a synodic lock (or not screened) stay last either way.
+  const screened = key === 'holdKm' || key === 'sun' || key === 'ecc';
+  const lockless = (i: number) =>
+    (key === 'lock' && table.lock[i] < 0) || (screened && Number.isNaN(table[key as 'holdKm' | 'sun' | 'ecc'][i])) ? 1 : 0;
   order.sort(direction === 'asc' ? compare : (a, b) => lockless(a) - lockless(b) || compare(b, a));
   return Int32Array.from(order);
 }

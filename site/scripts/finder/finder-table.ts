@@ -18,7 +18,12 @@ export interface FinderTable {
   stable: Uint8Array;
   lock: Int32Array;
   lockRelError: Float64Array; // NaN where the orbit has no lock
+  holdKm: Float64Array; // NaN where the orbit was not screened
+  sun: Float64Array; // surviving fraction, NaN where not screened
+  ecc: Float64Array;
 }
+
+const orNaN = (v: number | null) => (v === null ? NaN : v);
 
 export function decodeFinderData(file: FinderDataFile): FinderTable {
   if (file.version !== FINDER_DATA_VERSION) {
@@ -42,6 +47,9 @@ export function decodeFinderData(file: FinderDataFile): FinderTable {
     secondaryAltKm: Float64Array.from(c.secondaryAltKm),
     stable: Uint8Array.from(c.stable),
     lock: Int32Array.from(c.lock),
-    lockRelError: Float64Array.from(c.lockRelError, (v) => (v === null ? NaN : v)),
+    lockRelError: Float64Array.from(c.lockRelError, orNaN),
+    holdKm: Float64Array.from(c.holdKm, orNaN),
+    sun: Float64Array.from(c.sun, orNaN),
+    ecc: Float64Array.from(c.ecc, orNaN),
   };
 }
