@@ -3,8 +3,7 @@ import type { FamilyChartInput } from './chart-input.ts';
 import { jacobiChartText, periodChartText, stabilityChartText, verticalChartText } from './chart-text.ts';
 import { jacobiAltitudeChart } from './jacobi-altitude-chart.ts';
 import { periodJacobiChart } from './period-jacobi-chart.ts';
-import { stabilityIndexChart } from './stability-index-chart.ts';
-import { verticalIndexChart } from './vertical-index-chart.ts';
+import { indexAltitudeChart } from './index-altitude-chart.ts';
 import { holdRadiusChart } from './hold-radius-chart.ts';
 import type { HoldRadiusChartInput } from './hold-radius-input.ts';
 import { holdRadiusChartText } from './hold-radius-text.ts';
@@ -24,10 +23,10 @@ export function familyChartSpecs(input: FamilyChartInput): FamilyChartSpec[] {
   const periodText = periodChartText(input);
   const verticalText = verticalChartText(input);
   return [
-    { key: 'stability', heading: 'In-plane stability index ν', text: stabilityText, spec: stabilityIndexChart(input, stabilityText) },
+    { key: 'stability', heading: 'In-plane stability index ν', text: stabilityText, spec: indexAltitudeChart(input, stabilityText, 'in-plane') },
     { key: 'jacobi', heading: 'Jacobi constant', text: jacobiText, spec: jacobiAltitudeChart(input, jacobiText) },
     { key: 'period', heading: 'Period', text: periodText, spec: periodJacobiChart(input, periodText) },
-    { key: 'vertical', heading: 'Vertical stability index ν_z', text: verticalText, spec: verticalIndexChart(input, verticalText) },
+    { key: 'vertical', heading: 'Vertical stability index ν_z', text: verticalText, spec: indexAltitudeChart(input, verticalText, 'vertical') },
   ];
 }
 

@@ -1,7 +1,7 @@
 // Jacobi constant C against minimum altitude above the smaller body, stable windows shaded.
 import { altitudeChannel } from './altitude-channel.ts';
 import type { FamilyChartInput } from './chart-input.ts';
-import { CHART_HEIGHT, CHART_WIDTH, chartConfig } from './chart-style.ts';
+import { familyChartSpec } from './family-chart-spec.ts';
 import { bifurcationLayer, familyLineLayer, memberLayer, windowLayer, type Channel } from './family-chart-layers.ts';
 
 export function jacobiAltitudeChart(input: FamilyChartInput, description: string) {
@@ -12,18 +12,10 @@ export function jacobiAltitudeChart(input: FamilyChartInput, description: string
     scale: { type: 'linear', zero: false },
     axis: { format: '.4~f' },
   };
-  return {
-    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
-    description,
-    width: CHART_WIDTH,
-    height: CHART_HEIGHT,
-    config: chartConfig,
-    // Empty layers are left out (vega warns about the infinite extent of an empty field).
-    layer: [
-      ...(input.windows.length > 0 ? [windowLayer(input.windows, x, 'fromAltKm', 'toAltKm')] : []),
-      familyLineLayer(input.members, x, y),
-      memberLayer(input.members, x, y, (m) => Math.abs(m.nu) < 1, input.secondaryName),
-      ...(input.bifurcations.length > 0 ? [bifurcationLayer(input.bifurcations, 'altKm', x, y, (b) => b.jacobi)] : []),
-    ],
-  };
+  return familyChartSpec(description, [
+    input.windows.length > 0 ? windowLayer(input.windows, x, 'fromAltKm', 'toAltKm') : null,
+    familyLineLayer(input.members, x, y),
+    memberLayer(input.members, x, y, (m) => Math.abs(m.nu) < 1, input.secondaryName),
+    input.bifurcations.length > 0 ? bifurcationLayer(input.bifurcations, 'altKm', x, y, (b) => b.jacobi) : null,
+  ]);
 }

@@ -1,6 +1,6 @@
 // Period in days against the Jacobi constant, stable windows shaded over their C range.
 import type { FamilyChartInput } from './chart-input.ts';
-import { CHART_HEIGHT, CHART_WIDTH, chartConfig } from './chart-style.ts';
+import { familyChartSpec } from './family-chart-spec.ts';
 import { bifurcationLayer, familyLineLayer, memberLayer, windowLayer, type Channel } from './family-chart-layers.ts';
 
 export function periodJacobiChart(input: FamilyChartInput, description: string) {
@@ -15,18 +15,10 @@ export function periodJacobiChart(input: FamilyChartInput, description: string) 
     title: 'period (days)',
     scale: { type: 'linear', zero: false },
   };
-  return {
-    $schema: 'https://vega.github.io/schema/vega-lite/v6.json',
-    description,
-    width: CHART_WIDTH,
-    height: CHART_HEIGHT,
-    config: chartConfig,
-    // Empty layers are left out (vega warns about the infinite extent of an empty field).
-    layer: [
-      ...(input.windows.length > 0 ? [windowLayer(input.windows, x, 'fromJacobi', 'toJacobi')] : []),
-      familyLineLayer(input.members, x, y),
-      memberLayer(input.members, x, y, (m) => Math.abs(m.nu) < 1, input.secondaryName),
-      ...(input.bifurcations.length > 0 ? [bifurcationLayer(input.bifurcations, 'jacobi', x, y, (b) => b.periodDays)] : []),
-    ],
-  };
+  return familyChartSpec(description, [
+    input.windows.length > 0 ? windowLayer(input.windows, x, 'fromJacobi', 'toJacobi') : null,
+    familyLineLayer(input.members, x, y),
+    memberLayer(input.members, x, y, (m) => Math.abs(m.nu) < 1, input.secondaryName),
+    input.bifurcations.length > 0 ? bifurcationLayer(input.bifurcations, 'jacobi', x, y, (b) => b.periodDays) : null,
+  ]);
 }

@@ -1,0 +1,34 @@
+// A stability index (in-plane ν or vertical ν_z) against minimum altitude above the smaller body, symlog y
+// (indices span 1e-1 to 1e8), with the |index| < 1 band, the bifurcations of that plane (tangent at +1,
+// period doubling at −1) and, for the in-plane index, the stable windows.
+import { altitudeChannel } from './altitude-channel.ts';
+import type { FamilyChartInput } from './chart-input.ts';
+import { SYMLOG_LABEL_EXPR, symlogTicks } from './chart-style.ts';
+import { familyChartSpec } from './family-chart-spec.ts';
+import { bandLayer, bifurcationLayer, familyLineLayer, memberLayer, windowLayer, type Channel } from './family-chart-layers.ts';
+
+const PLANES = {
+  'in-plane': { field: 'nu', title: 'in-plane index ν (symlog scale)' },
+  vertical: { field: 'nuV', title: 'vertical index ν_z (symlog scale)' },
+} as const;
+
+export function indexAltitudeChart(input: FamilyChartInput, description: string, plane: 'in-plane' | 'vertical') {
+  const { field, title } = PLANES[plane];
+  const indexOf = (m: FamilyChartInput['members'][number]) => m[field];
+  const x = altitudeChannel(input);
+  const y: Channel = {
+    field,
+    title,
+    scale: { type: 'symlog', constant: 1 },
+    axis: { values: symlogTicks(input.members.map(indexOf)), labelExpr: SYMLOG_LABEL_EXPR },
+  };
+  const bifurcations = input.bifurcations.filter((b) => b.plane === plane);
+  const windows = plane === 'in-plane' ? input.windows : [];
+  return familyChartSpec(description, [
+    bandLayer(y),
+    windows.length > 0 ? windowLayer(windows, x, 'fromAltKm', 'toAltKm') : null,
+    familyLineLayer(input.members, x, y),
+    memberLayer(input.members, x, y, (m) => Math.abs(indexOf(m)) < 1, input.secondaryName),
+    bifurcations.length > 0 ? bifurcationLayer(bifurcations, 'altKm', x, y, (b) => (b.kind === 'tangent' ? 1 : -1)) : null,
+  ]);
+}
