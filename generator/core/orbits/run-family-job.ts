@@ -148,7 +148,7 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
       ? { members: result.members, changes: [], windows: [] }
       : locateStabilityChanges(context, seed.halfCrossings, result.members, job.indexTolerance, corrector);
     const bundle = buildFamilyBundle(system, {
-      id: `${system.id}/${label}/${letter}`, jobKey: job.key, name: job.name, kind, signature: label, seedSegment: seed.segment,
+      id: `${system.id}/${label}/${letter}`, jobKey: job.key, name: rule.kind === 'lap-signature' ? `${job.name} (${letter})` : job.name, kind, signature: label, seedSegment: seed.segment,
     }, map, { start: result.endReasonStart, end: result.endReasonEnd });
     bundles.push(bundle);
     if (!stopped && job.screening && bundle.stableWindows.length > 0) {
