@@ -4,36 +4,28 @@
 // barycentre (the indirect term m_s/a_s² (cos θ, sin θ)), which is what acts in a frame centred on the
 // barycentre:  ẍ − 2ẏ = Ω_x − m_s (x − x_s)/r_s³ − m_s cos θ / a_s², and alike for y; z̈ = Ω_z − m_s z / r_s³.
 // The model is not coherent (the primaries do not feel the Sun), as Simó et al. point out.
+import { spatialEquations } from '../cr3bp/equations-spatial.ts';
 import type { Rhs } from '../dop853/workspace.ts';
 import type { BicircularParameters } from './bicircular-parameters.ts';
 
 export function bicircularEquations(mu: number, sun: BicircularParameters): Rhs {
-  const m1 = 1 - mu;
+  // The CR3BP part is the CR3BP's own right-hand side, so that sunMass = 0 gives the same numbers.
+  const cr3bp = spatialEquations(mu);
   const ms = sun.sunMass;
   const as = sun.sunDistanceNd;
   const indirect = ms / (as * as);
   const rate = sun.sunRateNd;
   const phase = sun.sunPhaseRad;
   return (t, s, d) => {
-    const x = s[0], y = s[1], z = s[2], vx = s[3], vy = s[4];
-    // CR3BP part, written as in cr3bp/equations-spatial.ts so that sunMass = 0 gives the same numbers.
-    const dx1 = x + mu, dx2 = x - m1;
-    const yz2 = y * y + z * z;
-    const r1sq = dx1 * dx1 + yz2, r2sq = dx2 * dx2 + yz2;
-    const r1c = r1sq * Math.sqrt(r1sq), r2c = r2sq * Math.sqrt(r2sq);
-    const a1 = m1 / r1c, a2 = mu / r2c;
-    const sum = a1 + a2;
-    // Sun part.
+    cr3bp(t, s, d);
+    const x = s[0], y = s[1], z = s[2];
     const theta = phase + rate * t;
     const c = Math.cos(theta), sn = Math.sin(theta);
     const dxs = x - as * c, dys = y - as * sn;
     const rssq = dxs * dxs + dys * dys + z * z;
     const asun = ms / (rssq * Math.sqrt(rssq));
-    d[0] = vx;
-    d[1] = vy;
-    d[2] = s[5];
-    d[3] = x + 2 * vy - a1 * dx1 - a2 * dx2 - (asun * dxs + indirect * c);
-    d[4] = y - 2 * vx - sum * y - (asun * dys + indirect * sn);
-    d[5] = -sum * z - asun * z;
+    d[3] -= asun * dxs + indirect * c;
+    d[4] -= asun * dys + indirect * sn;
+    d[5] -= asun * z;
   };
 }
