@@ -6,3 +6,4 @@ export { CATALOG_SCHEMA_VERSION } from './schema-version.ts';
 export { openCatalogForRead, openCatalogForWrite } from './open-catalog.ts';
 export { exportCatalogCsv, exportCatalogJson, type ExportOptions } from './export-catalog.ts';
 export { mergeCatalogs, type MergeInputReport, type MergeReport } from './merge-catalogs.ts';
+export { stableWindowRow } from './stable-window-row.ts';

@@ -1,5 +1,6 @@
 // Turns a continued, analysed family into catalog rows (nondimensional values plus km and days).
-import type { BifurcationRow, FamilyBundle, FamilyKind, OrbitRow, StableWindowRow } from '../../../catalog-db/types.ts';
+import { stableWindowRow } from '../../../catalog-db/stable-window-row.ts';
+import type { BifurcationRow, FamilyBundle, FamilyKind, OrbitRow } from '../../../catalog-db/types.ts';
 import type { EndReason } from './continue-family.ts';
 import type { FamilyMember } from './family-member.ts';
 import type { SystemSpec } from './family-job.ts';
@@ -64,23 +65,8 @@ export function buildFamilyBundle(
   const orbits = members.map((m, seq) => orbitRowOf(system, id, seq, m));
   const rowOf = new Map(members.map((m, i) => [m, orbits[i]]));
 
-  const stableWindows: StableWindowRow[] = map.windows.map((w, k) => {
-    const from = rowOf.get(w.from)!, to = rowOf.get(w.to)!, middle = rowOf.get(w.middle)!;
-    return {
-      id: `${id}/window-${k + 1}`,
-      familyId: id,
-      fromJacobi: from.jacobi,
-      toJacobi: to.jacobi,
-      fromSecondaryMinAltKm: from.secondaryMinAltKm,
-      toSecondaryMinAltKm: to.secondaryMinAltKm,
-      widthKm: Math.abs(to.secondaryMinAltKm - from.secondaryMinAltKm),
-      widthJacobi: Math.abs(to.jacobi - from.jacobi),
-      fromArclength: from.arclength,
-      toArclength: to.arclength,
-      midOrbitId: middle.id,
-      midPeriodDays: middle.periodDays,
-    };
-  });
+  const stableWindows = map.windows.map((w, k) =>
+    stableWindowRow(`${id}/window-${k + 1}`, id, rowOf.get(w.from)!, rowOf.get(w.to)!, rowOf.get(w.middle)!));
   const bifurcations: BifurcationRow[] = map.changes.map((c, k) => {
     const row = rowOf.get(c.member)!;
     return {
