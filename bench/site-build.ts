@@ -13,6 +13,7 @@ import { gzipSync } from 'node:zlib';
 import { buildSite } from '../test/site/build-site.ts';
 import { writeSyntheticCatalog } from '../test/fixtures/synthetic-catalog.ts';
 import { addSyntheticScreenings } from '../test/site/synthetic-screenings.ts';
+import { CHROMIUM_PATH, launchChromium } from '../test/site/launch-chromium.ts';
 
 interface RouteTime {
   route: string;
@@ -80,14 +81,10 @@ function orbitPageWeight(outDir: string, base: string) {
 }
 
 async function finderFilterInBrowser(outDir: string): Promise<number[] | null> {
-  if (!existsSync('/usr/bin/chromium')) return null;
-  const { chromium } = await import('playwright-core');
+  if (!existsSync(CHROMIUM_PATH)) return null;
   const { serveStatic } = await import('../test/site/static-server.ts');
   const site = await serveStatic(outDir, '/');
-  const browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: ['--no-sandbox', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
+  const browser = await launchChromium();
   try {
     const page = await browser.newPage();
     await page.goto(`${site.root}finder/`);
@@ -118,14 +115,10 @@ async function finderFilterInBrowser(outDir: string): Promise<number[] | null> {
 
 /** Browser time of epoch-dated (EME2000) downloads on one orbit page: the page's own "computed in" note. */
 async function datedDownloadInBrowser(outDir: string, orbitPath: string): Promise<string[] | null> {
-  if (!existsSync('/usr/bin/chromium')) return null;
-  const { chromium } = await import('playwright-core');
+  if (!existsSync(CHROMIUM_PATH)) return null;
   const { serveStatic } = await import('../test/site/static-server.ts');
   const site = await serveStatic(outDir, '/');
-  const browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: ['--no-sandbox', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
+  const browser = await launchChromium();
   try {
     const context = await browser.newContext({ acceptDownloads: true });
     const page = await context.newPage();

@@ -7,7 +7,7 @@ import { mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { GeoMoonState, KM_PER_AU } from 'astronomy-engine';
-import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { rotatingToInertialAtEpoch } from '../../generator/core/beyond/rotating-to-inertial-at-epoch.ts';
 import { sampleTrajectory } from '../../generator/core/propagation/sample-trajectory.ts';
@@ -16,6 +16,7 @@ import { DOWNLOAD_TOLERANCE } from '../../site/scripts/state-vectors/state-serie
 import { queryToState } from '../../site/scripts/finder/finder-query.ts';
 import { buildSite, REPO_ROOT } from './build-site.ts';
 import { finderSql } from './finder-sql.ts';
+import { launchChromium } from './launch-chromium.ts';
 import { parseOem } from './parse-oem.ts';
 import { ARENSTORF, HOSTILE_SCENARIO, HOSTILE_TEXT, writeSiteTestCatalog } from './site-test-catalog.ts';
 import { serveStatic, type StaticSite } from './static-server.ts';
@@ -39,11 +40,7 @@ beforeAll(async () => {
   await buildSite({ dbPath, outDir: join(dir, 'dist'), base: BASE });
   site = await serveStatic(join(dir, 'dist'), BASE);
   mkdirSync(ARTIFACTS, { recursive: true });
-  browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    headless: true,
-    args: ['--no-sandbox', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
+  browser = await launchChromium();
   context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1280, height: 900 } });
   context.on('request', (request) => requests.push(request.url()));
 }, 300_000);
