@@ -7,6 +7,7 @@ import { propagate } from '../propagation/propagate.ts';
 import { countLaps, type AxisCrossing, type LapCounts } from './lap-signature.ts';
 import { neckHalfWidth } from './neck-half-width.ts';
 import { eigenvaluePair, stabilityIndices } from './stability-indices.ts';
+import { orbitCheck } from './verify-orbit.ts';
 
 export interface AnalysisContext {
   mu: number;
@@ -121,7 +122,6 @@ export function analyseOrbit(context: AnalysisContext, x0: number, vy0: number, 
     maxDistanceNd: summary.farthest,
     l1Passages: summary.l1Passages,
     laps: summary.laps,
-    closureError: Math.hypot(...Array.from(end, (v, i) => v - state0[i])),
-    jacobiDrift: Math.abs(jacobiConstant(mu, end) - jacobi),
+    ...orbitCheck(mu, state0, end),
   };
 }

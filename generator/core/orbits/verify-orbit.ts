@@ -7,10 +7,14 @@ export interface OrbitCheck {
   jacobiDrift: number;
 }
 
-export function verifyOrbit(mu: number, state0: readonly number[], periodNd: number, tolerance: { rtol: number; atol: number }): OrbitCheck {
-  const end = propagate(mu, state0, periodNd, tolerance).state;
+/** How far an end state is from the start state, in the state and in the Jacobi constant. */
+export function orbitCheck(mu: number, state0: ArrayLike<number>, end: ArrayLike<number>): OrbitCheck {
   return {
     closureError: Math.hypot(...Array.from(end, (v, i) => v - state0[i])),
     jacobiDrift: Math.abs(jacobiConstant(mu, end) - jacobiConstant(mu, state0)),
   };
+}
+
+export function verifyOrbit(mu: number, state0: readonly number[], periodNd: number, tolerance: { rtol: number; atol: number }): OrbitCheck {
+  return orbitCheck(mu, state0, propagate(mu, state0, periodNd, tolerance).state);
 }
