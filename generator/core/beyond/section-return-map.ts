@@ -1,6 +1,7 @@
 // Iterates of the Poincaré return map of the planar CR3BP at fixed Jacobi constant on an orbit's start
 // section (start-section.ts): from (x, ẋ) on y = 0, ẏ from C with the section's sign, one return = as many
 // section crossings as the orbit itself makes in one period. One continuous integration for all returns.
+import { axisSpeedSquared } from '../cr3bp/axis-speed-squared.ts';
 import { spatialEquations } from '../cr3bp/equations-spatial.ts';
 import type { Rhs } from '../dop853/workspace.ts';
 import { AxisCrossingWatch } from './axis-crossing-watch.ts';
@@ -48,8 +49,7 @@ export function iterateSectionMap(
   map: SectionMap, x: number, vx: number, returns: number, onReturn: (x: number, vx: number, index: number) => boolean,
 ): MapRun {
   const { mu, section, jacobi } = map;
-  const twiceOmega = x * x + (2 * (1 - mu)) / Math.abs(x + mu) + (2 * mu) / Math.abs(x - 1 + mu);
-  const vySquared = twiceOmega - jacobi - vx * vx;
+  const vySquared = axisSpeedSquared(mu, x, jacobi) - vx * vx;
   if (!(vySquared > 0)) return { returns: 0, failure: 'hill-region' };
   start[0] = x; start[1] = 0; start[2] = 0; start[3] = vx; start[4] = section.direction * Math.sqrt(vySquared); start[5] = 0;
   let hits = 0;

@@ -8,3 +8,4 @@ export type { LagrangePoint } from './lagrange-points.ts';
 export { linearPlanarPeriod } from './linear-planar-period.ts';
 export { SYSTEM_PRESETS, findSystemPreset, massRatioOf, timeUnitSecondsOf } from './system-presets.ts';
 export type { SystemPreset } from './system-presets.ts';
+export { axisSpeedSquared } from './axis-speed-squared.ts';

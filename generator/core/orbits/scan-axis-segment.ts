@@ -1,6 +1,7 @@
 // Seed search at fixed Jacobi constant: start points along one segment of the x-axis, perpendicular
 // (ẋ = 0, ẏ from C), and the roots of ẋ at the k-th crossing of y = 0 for k = 1..K (mirror theorem,
 // Roy & Ovenden 1955): each root is a symmetric periodic orbit with half period at that crossing.
+import { axisSpeedSquared } from '../cr3bp/axis-speed-squared.ts';
 import { findRootBrent } from '../events/find-root-brent.ts';
 import { yAxisCrossing } from '../events/y-axis-crossing.ts';
 import { propagate } from '../propagation/propagate.ts';
@@ -29,8 +30,7 @@ export interface ScanOptions {
 
 /** ẏ of a perpendicular start at (x, 0) with Jacobi constant C; NaN where the point is not reachable. */
 export function perpendicularSpeed(mu: number, x: number, jacobi: number): number {
-  const twiceOmega = x * x + (2 * (1 - mu)) / Math.abs(x + mu) + (2 * mu) / Math.abs(x - 1 + mu);
-  const vSquared = twiceOmega - jacobi;
+  const vSquared = axisSpeedSquared(mu, x, jacobi);
   return vSquared > 0 ? Math.sqrt(vSquared) : NaN;
 }
 
