@@ -7,3 +7,5 @@ export { openCatalogForRead, openCatalogForWrite } from './open-catalog.ts';
 export { exportCatalogCsv, exportCatalogJson, type ExportOptions } from './export-catalog.ts';
 export { mergeCatalogs, type MergeInputReport, type MergeReport } from './merge-catalogs.ts';
 export { stableWindowRow } from './stable-window-row.ts';
+export { familySummary } from './family-summary.ts';
+export type { FamilySummary } from './family-summary.ts';

@@ -1,4 +1,5 @@
 // Turns a continued, analysed family into catalog rows (nondimensional values plus km and days).
+import { familySummary } from '../../../catalog-db/family-summary.ts';
 import { stableWindowRow } from '../../../catalog-db/stable-window-row.ts';
 import type { BifurcationRow, FamilyBundle, FamilyKind, OrbitRow } from '../../../catalog-db/types.ts';
 import type { EndReason } from './continue-family.ts';
@@ -81,8 +82,6 @@ export function buildFamilyBundle(
       state0: row.state0,
     };
   });
-  const jacobis = orbits.map((o) => o.jacobi);
-  const periods = orbits.map((o) => o.periodDays);
   const first = members[0].analysis.laps;
   return {
     family: {
@@ -98,12 +97,7 @@ export function buildFamilyBundle(
       seedSegment: identity.seedSegment,
       endReasonStart: ends.start,
       endReasonEnd: ends.end,
-      memberCount: orbits.length,
-      jacobiMin: Math.min(...jacobis),
-      jacobiMax: Math.max(...jacobis),
-      periodDaysMin: Math.min(...periods),
-      periodDaysMax: Math.max(...periods),
-      stableWindowCount: stableWindows.length,
+      ...familySummary(orbits, stableWindows),
     },
     orbits,
     stableWindows,
