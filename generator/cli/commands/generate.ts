@@ -7,9 +7,10 @@ import { formatConfigPath } from '../../config/config-path.ts';
 import { loadConfig, type LoadedConfig } from '../../config/load-config.ts';
 import { SINGLE_FAMILY_OPTION_OF_PATH, singleFamilyConfig } from '../../config/single-family-config.ts';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
-import { parseIntegerOption, parseNumberListOption, parseShardOption, UsageError } from '../../run/command-line-values.ts';
+import { parseIntegerOption, parseNumberListOption, UsageError } from '../../run/command-line-values.ts';
 import { generateFromConfig, type GenerateSummary } from '../../run/generate-catalog.ts';
 import { INTERRUPTED_EXIT_CODE } from '../../run/interrupt-handler.ts';
+import { shardFromOptions } from '../../run/shard-from-environment.ts';
 
 export const DEFAULT_CONFIG_PATH = 'catalogs/demo.yaml';
 export const DEFAULT_DB_PATH = 'catalog-db/demo.sqlite';
@@ -19,6 +20,7 @@ interface GenerateFlags {
   db: string;
   workers?: string;
   shard?: string;
+  shardCount?: string;
   system?: string;
   signature?: string;
   lyapunov?: string;
@@ -33,7 +35,8 @@ export function createGenerateCommand(): Command {
     .argument('[config]', `catalog config (YAML; default ${DEFAULT_CONFIG_PATH})`)
     .option('--db <file>', 'catalog file to write (created if missing)', DEFAULT_DB_PATH)
     .option('--workers <n>', 'worker threads (default: one per core)')
-    .option('--shard <k/n>', 'run only shard k of n (jobs whose index mod n is k-1)')
+    .option('--shard <k/n|auto>', 'run only shard k of n (jobs whose index mod n is k-1); auto: from SLURM_ARRAY_TASK_ID or JOB_COMPLETION_INDEX')
+    .option('--shard-count <n>', 'with --shard auto: number of shards (needed with JOB_COMPLETION_INDEX)')
     .option('--system <id>', 'one family without a config: system preset id, e.g. earth-moon')
     .option('--signature <sig>', 'with --system: lap signature, e.g. E2M1')
     .option('--lyapunov <point>', 'with --system: L1 or L2 Lyapunov family')
@@ -53,7 +56,7 @@ export function createGenerateCommand(): Command {
 
 async function generate(configArg: string | undefined, flags: GenerateFlags): Promise<GenerateSummary> {
   const workers = flags.workers === undefined ? undefined : parseIntegerOption('--workers', flags.workers, 1, 256);
-  const shard = flags.shard === undefined ? undefined : parseShardOption('--shard', flags.shard);
+  const shard = shardFromOptions(flags.shard, flags.shardCount, process.env);
   if (!(PROGRESS_MODES as readonly string[]).includes(flags.progress)) {
     throw new UsageError(`--progress: "${flags.progress}" is not allowed (allowed: ${PROGRESS_MODES.join(', ')})`);
   }
