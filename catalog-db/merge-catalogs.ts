@@ -78,8 +78,8 @@ function prepareMergeInput(out: Database, outPath: string) {
   const outRun = out.prepare('SELECT * FROM runs WHERE id = ?');
   const setRunFinished = out.prepare('UPDATE runs SET finished_at = ? WHERE id = ?');
   const upsertJob = out.prepare(
-    'INSERT INTO jobs (job_key, run_id, done_at) VALUES (?, ?, ?) ON CONFLICT (job_key) DO UPDATE ' +
-      'SET run_id = excluded.run_id, done_at = excluded.done_at WHERE excluded.done_at > jobs.done_at',
+    'INSERT INTO jobs (job_key, run_id, done_at, settings) VALUES (?, ?, ?, ?) ON CONFLICT (job_key) DO UPDATE ' +
+      'SET run_id = excluded.run_id, done_at = excluded.done_at, settings = excluded.settings WHERE excluded.done_at > jobs.done_at',
   );
   const outMeta = out.prepare('SELECT value FROM meta WHERE key = ?').pluck();
   const insertMeta = out.prepare('INSERT INTO meta (key, value) VALUES (?, ?)');
@@ -158,12 +158,8 @@ function prepareMergeInput(out: Database, outPath: string) {
       report.familiesWritten += 1;
     }
 
-    const jobs = input.prepare('SELECT job_key, run_id, done_at FROM jobs ORDER BY job_key').all() as Array<{
-      job_key: string;
-      run_id: number;
-      done_at: string;
-    }>;
-    for (const job of jobs) upsertJob.run(job.job_key, runIdMap.get(job.run_id), job.done_at);
+    const jobs = reader.jobSettings();
+    for (const job of jobs) upsertJob.run(job.jobKey, runIdMap.get(job.runId), job.doneAt, JSON.stringify(job.settings));
     report.jobsMerged = jobs.length;
     return report;
   };

@@ -13,7 +13,7 @@ import {
   stableWindowTable,
   systemTable,
 } from './table-columns.ts';
-import type { CatalogReader } from './types.ts';
+import type { CatalogReader, StoredJobSettings } from './types.ts';
 
 /** The reader owns the connection: close() closes it. */
 export function createCatalogReader(db: Database): CatalogReader {
@@ -44,6 +44,7 @@ export function createCatalogReader(db: Database): CatalogReader {
       ORDER BY m.family_id, o.seq, m.model`),
     familyScreenings: all(`SELECT m.* FROM model_screenings AS m JOIN orbits AS o ON o.id = m.orbit_id
       WHERE m.family_id = ? ORDER BY o.seq, m.model`),
+    jobs: all('SELECT job_key, run_id, done_at, settings FROM jobs ORDER BY job_key'),
   };
   const meta = prepareMetaStore(db);
   return {
@@ -65,6 +66,15 @@ export function createCatalogReader(db: Database): CatalogReader {
     modelScreenings: (familyId) =>
       (familyId === undefined ? q.allScreenings() : q.familyScreenings(familyId)).map(modelScreeningTable.fromRecord),
     scenario: () => meta.getScenario(),
+    jobSettings: () =>
+      q.jobs().map(
+        (record): StoredJobSettings => ({
+          jobKey: record.job_key as string,
+          runId: record.run_id as number,
+          doneAt: record.done_at as string,
+          settings: JSON.parse(record.settings as string) as StoredJobSettings['settings'],
+        }),
+      ),
     close: () => db.close(),
   };
 }

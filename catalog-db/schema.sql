@@ -4,6 +4,7 @@
 -- Arrays (state0, eigenvalues, monodromy, curves, per-phase lists) and the screening parameters are JSON
 -- text. STRICT tables reject values of the wrong type.
 -- Version 2 added hold_radii, model_screenings and the view vertical_branch_points.
+-- Version 3 added jobs.settings: the settings a done job's results depend on.
 
 CREATE TABLE systems (
   id                  TEXT PRIMARY KEY,
@@ -145,11 +146,14 @@ CREATE TABLE model_screenings (
   PRIMARY KEY (orbit_id, model)
 ) STRICT;
 
--- One row per config entry (job) whose families are all written; resume skips these.
+-- One row per config entry (job) whose families are all written; resume skips these. settings is the
+-- job as the generator got it (system constants, seed rule, limits, tolerances, screening; JSON), so a
+-- later run or a merge can tell whether the stored results still match what it would compute.
 CREATE TABLE jobs (
-  job_key TEXT PRIMARY KEY,
-  run_id  INTEGER NOT NULL REFERENCES runs (id),
-  done_at TEXT NOT NULL
+  job_key  TEXT PRIMARY KEY,
+  run_id   INTEGER NOT NULL REFERENCES runs (id),
+  done_at  TEXT NOT NULL,
+  settings TEXT NOT NULL CHECK (json_type(settings) = 'object')
 ) STRICT;
 
 -- Catalog-wide key/value facts: scenario.name, scenario.description, scenario.team.

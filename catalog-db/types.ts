@@ -135,6 +135,20 @@ export interface ScenarioMeta {
   team: string;
 }
 
+/** A job as the generator got it (generator/core/orbits/family-job.ts FamilyJob): its key and every
+ *  setting its results depend on. The writer stores the whole object as the job's settings (JSON). */
+export interface JobWithSettings {
+  readonly key: string;
+}
+
+/** A done job's row: its settings as stored (the JSON of the JobWithSettings it was marked done with). */
+export interface StoredJobSettings {
+  jobKey: string;
+  runId: number;
+  doneAt: string; // ISO 8601
+  settings: { key: string } & Record<string, unknown>;
+}
+
 /** Read side of the catalog, used by the site build and by `export`. Implemented in catalog-db/query.ts. */
 export interface CatalogReader {
   systems(): SystemRow[];
@@ -150,6 +164,8 @@ export interface CatalogReader {
   /** Sun and eccentricity screenings, ordered by familyId, the orbit's seq, then model. */
   modelScreenings(familyId?: string): ModelScreeningRow[];
   scenario(): ScenarioMeta | null; // null until setScenario has been called
+  /** Every done job with the settings it was computed with, ordered by jobKey. */
+  jobSettings(): StoredJobSettings[];
   close(): void;
 }
 
@@ -161,10 +177,10 @@ export interface CatalogWriter {
   /** True once every family of this config entry (job) has been written (resume skips it). */
   jobDone(jobKey: string): boolean;
   /** One transaction: replaces any family with the same id (and everything under it), all or nothing.
-   *  With completesJob, the job is marked done in the same transaction. */
-  writeFamily(bundle: FamilyBundle, completesJob?: string): void;
-  /** Marks a job done that produced no family (e.g. nothing found), in one transaction. */
-  markJobDone(jobKey: string, runId: number): void;
+   *  With completesJob, the job is marked done (its settings stored) in the same transaction. */
+  writeFamily(bundle: FamilyBundle, completesJob?: JobWithSettings): void;
+  /** Marks a job done that produced no family (e.g. nothing found), with its settings, in one transaction. */
+  markJobDone(job: JobWithSettings, runId: number): void;
   /** Stores the scenario's name, description and team (replaces any earlier ones). */
   setScenario(scenario: ScenarioMeta): void;
   close(): void;

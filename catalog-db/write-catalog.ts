@@ -1,10 +1,11 @@
 // Write side of the catalog (CatalogWriter) over an open connection. Every method is one
 // transaction; statements are prepared once.
 import type { Database } from 'better-sqlite3';
+import { jobSettingsJson } from './job-settings.ts';
 import { prepareMetaStore } from './meta.ts';
 import { prepareReplaceFamily } from './replace-family.ts';
 import { runTable, systemTable } from './table-columns.ts';
-import type { CatalogWriter } from './types.ts';
+import type { CatalogWriter, JobWithSettings } from './types.ts';
 
 /** The writer owns the connection: close() closes it. */
 export function createCatalogWriter(db: Database): CatalogWriter {
@@ -17,19 +18,19 @@ export function createCatalogWriter(db: Database): CatalogWriter {
   const runExists = db.prepare('SELECT 1 FROM runs WHERE id = ?').pluck();
   const jobDone = db.prepare('SELECT 1 FROM jobs WHERE job_key = ?').pluck();
   const upsertJob = db.prepare(
-    'INSERT INTO jobs (job_key, run_id, done_at) VALUES (?, ?, ?) ' +
-      'ON CONFLICT (job_key) DO UPDATE SET run_id = excluded.run_id, done_at = excluded.done_at',
+    'INSERT INTO jobs (job_key, run_id, done_at, settings) VALUES (?, ?, ?, ?) ' +
+      'ON CONFLICT (job_key) DO UPDATE SET run_id = excluded.run_id, done_at = excluded.done_at, settings = excluded.settings',
   );
   const replaceFamily = prepareReplaceFamily(db);
   const meta = prepareMetaStore(db);
 
-  const markJob = (jobKey: string, runId: number, where: string) => {
-    if (typeof jobKey !== 'string' || jobKey === '') throw new Error(`${where}: jobKey must be a non-empty string`);
+  const markJob = (job: JobWithSettings, runId: number, where: string) => {
+    const settings = jobSettingsJson(job, where);
     if (runExists.get(runId) === undefined) throw new Error(`${where}: runId ${runId} is not in the catalog`);
-    upsertJob.run(jobKey, runId, new Date().toISOString());
+    upsertJob.run(job.key, runId, new Date().toISOString(), settings);
   };
 
-  const writeFamilyTransaction = db.transaction((bundle: Parameters<CatalogWriter['writeFamily']>[0], job?: string) => {
+  const writeFamilyTransaction = db.transaction((bundle: Parameters<CatalogWriter['writeFamily']>[0], job?: JobWithSettings) => {
     replaceFamily(bundle);
     if (job !== undefined) markJob(job, bundle.family.runId, 'completesJob');
   });
@@ -62,8 +63,8 @@ export function createCatalogWriter(db: Database): CatalogWriter {
         throw new Error(`writeFamily ${bundle?.family?.id}: nothing written (${message})`, { cause: error });
       }
     },
-    markJobDone(jobKey, runId) {
-      db.transaction(() => markJob(jobKey, runId, 'markJobDone'))();
+    markJobDone(job, runId) {
+      db.transaction(() => markJob(job, runId, 'markJobDone'))();
     },
     setScenario(scenario) {
       meta.setScenario(scenario);

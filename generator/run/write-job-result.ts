@@ -14,10 +14,10 @@ export function writeJobResult(writer: CatalogWriter, runId: number, job: Family
   const { bundles, interrupted } = result;
   let members = 0;
   bundles.forEach((bundle, index) => {
-    const completes = !interrupted && index === bundles.length - 1 ? job.key : undefined;
+    const completes = !interrupted && index === bundles.length - 1 ? job : undefined;
     writer.writeFamily({ ...bundle, family: { ...bundle.family, runId } }, completes);
     members += bundle.orbits.length;
   });
-  if (!interrupted && bundles.length === 0) writer.markJobDone(job.key, runId);
+  if (!interrupted && bundles.length === 0) writer.markJobDone(job, runId);
   return { families: bundles.length, members, done: !interrupted };
 }

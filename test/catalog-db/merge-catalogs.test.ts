@@ -45,9 +45,9 @@ function writeRuns(writer: CatalogWriter, runs: ShardRun[], system: SystemRow = 
   for (const run of runs) {
     const runId = writer.startRun(makeRunInput({ shard: run.shard, startedAt: run.startedAt }));
     for (const family of run.families) {
-      writer.writeFamily(makeBundle(family.id, { runId, offset: family.offset, orbitCount: family.orbitCount }), family.job);
+      writer.writeFamily(makeBundle(family.id, { runId, offset: family.offset, orbitCount: family.orbitCount }), family.job === undefined ? undefined : { key: family.job });
     }
-    for (const job of run.emptyJobs ?? []) writer.markJobDone(job, runId);
+    for (const job of run.emptyJobs ?? []) writer.markJobDone({ key: job }, runId);
     if (run.finishedAt !== null) writer.finishRun(runId, run.finishedAt);
   }
 }

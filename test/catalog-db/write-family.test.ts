@@ -48,7 +48,7 @@ describe('writeFamily', () => {
     const { path, writer, runId, first } = catalogWithFamily('duplicate.sqlite');
     const broken = makeBundle(familyId, { runId, orbitCount: 6, offset: 2 });
     broken.orbits[4] = { ...broken.orbits[4]!, id: broken.orbits[1]!.id }; // fails on the 5th orbit insert
-    expect(() => writer.writeFamily(broken, 'job-x')).toThrow(
+    expect(() => writer.writeFamily(broken, { key: 'job-x' })).toThrow(
       /^writeFamily test-system\/B2S1\/a: nothing written \(UNIQUE constraint failed: orbits\.id\)$/,
     );
     expect(writer.jobDone('job-x')).toBe(false); // the job mark rolls back with the family
@@ -67,7 +67,7 @@ describe('writeFamily', () => {
 
   it('keeps the previous version when the job key is bad (the last step of the transaction)', () => {
     const { path, writer, runId, first } = catalogWithFamily('bad-job.sqlite');
-    expect(() => writer.writeFamily(makeBundle(familyId, { runId, offset: 4 }), '')).toThrow('jobKey must be a non-empty string');
+    expect(() => writer.writeFamily(makeBundle(familyId, { runId, offset: 4 }), { key: '' })).toThrow("the job's key must be a non-empty string");
     writer.close();
     expectFamilyIntact(path, first);
   });
@@ -109,12 +109,12 @@ describe('jobs', () => {
     expect(writer.jobDone('job:a')).toBe(false);
     writer.writeFamily(makeBundle('test-system/B2S1/b', { runId }));
     expect(writer.jobDone('job:a')).toBe(false); // written without completesJob: more families may follow
-    writer.writeFamily(makeBundle('test-system/B2S1/c', { runId }), 'job:a');
+    writer.writeFamily(makeBundle('test-system/B2S1/c', { runId }), { key: 'job:a' });
     expect(writer.jobDone('job:a')).toBe(true);
     expect(writer.jobDone('job:empty')).toBe(false);
-    writer.markJobDone('job:empty', runId);
+    writer.markJobDone({ key: 'job:empty' }, runId);
     expect(writer.jobDone('job:empty')).toBe(true);
-    expect(() => writer.markJobDone('job:other', runId + 9)).toThrow(`markJobDone: runId ${runId + 9} is not in the catalog`);
+    expect(() => writer.markJobDone({ key: 'job:other' }, runId + 9)).toThrow(`markJobDone: runId ${runId + 9} is not in the catalog`);
     expect(writer.jobDone('job:other')).toBe(false);
     writer.close();
     // persisted, and visible to a later writer (what resume does)

@@ -76,7 +76,7 @@ export function writeSiteTestCatalog(path: string, synthetic = { orbitCount: 40,
       stableWindows: [],
       bifurcations: [],
     };
-    writer.writeFamily(bundle, 'site-test:arenstorf');
+    writer.writeFamily(bundle, { key: 'site-test:arenstorf' });
     writer.finishRun(runId, '2026-01-02T00:01:00.000Z');
     return { path, arenstorfOrbitId: orbit.id };
   } finally {
