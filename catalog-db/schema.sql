@@ -4,7 +4,7 @@
 -- Arrays (state0, eigenvalues, monodromy, curves, per-phase lists) and the screening parameters are JSON
 -- text. STRICT tables reject values of the wrong type.
 -- Version 2 added hold_radii, model_screenings and the view vertical_branch_points.
--- Version 3 added jobs.settings: the settings a done job's results depend on.
+-- Version 3 added jobs.settings: the settings a done job's results depend on, and the audits table.
 
 CREATE TABLE systems (
   id                  TEXT PRIMARY KEY,
@@ -154,6 +154,22 @@ CREATE TABLE jobs (
   run_id   INTEGER NOT NULL REFERENCES runs (id),
   done_at  TEXT NOT NULL,
   settings TEXT NOT NULL CHECK (json_type(settings) = 'object')
+) STRICT;
+
+-- One row per finished completeness audit (`cycler-atlas audit`): at random Jacobi levels (seeded, per
+-- system) that discovery did not use, the symmetric orbits of each lap-signature job found by an
+-- independent scan, and those not on any catalogued family of the job (misses, with their states; JSON).
+CREATE TABLE audits (
+  id                INTEGER PRIMARY KEY,
+  finished_at       TEXT NOT NULL,
+  seconds           REAL NOT NULL CHECK (seconds >= 0),
+  seed              INTEGER NOT NULL,
+  levels_per_system INTEGER NOT NULL CHECK (levels_per_system > 0),
+  levels            TEXT NOT NULL CHECK (json_type(levels) = 'object'),
+  jobs_audited      INTEGER NOT NULL CHECK (jobs_audited >= 0),
+  orbits_checked    INTEGER NOT NULL CHECK (orbits_checked >= 0),
+  miss_count        INTEGER NOT NULL CHECK (miss_count = json_array_length(misses)),
+  misses            TEXT NOT NULL CHECK (json_type(misses) = 'array')
 ) STRICT;
 
 -- Catalog-wide key/value facts: scenario.name, scenario.description, scenario.team.
