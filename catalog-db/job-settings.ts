@@ -17,7 +17,11 @@ export interface SettingDifference {
   given: unknown;
 }
 
-/** Compares the JSON forms (so a value that JSON cannot hold compares as JSON stores it); null when equal. */
+/** Fields of a job that only name things (shown on the site, never used in a computation). */
+const DISPLAY_ONLY_PATHS = new Set(['name', 'system.name', 'system.source', 'system.primaryName', 'system.secondaryName']);
+
+/** Compares the JSON forms (so a value that JSON cannot hold compares as JSON stores it), skipping the
+ *  display-only fields; null when every setting the results depend on is equal. */
 export function firstSettingDifference(stored: unknown, given: unknown): SettingDifference | null {
   return firstDifference(asJson(stored), asJson(given), '');
 }
@@ -42,6 +46,7 @@ function firstDifference(a: unknown, b: unknown, path: string): SettingDifferenc
   if (isPlainObject(a) && isPlainObject(b)) {
     const keys = [...new Set([...Object.keys(a), ...Object.keys(b)])];
     for (const key of keys) {
+      if (DISPLAY_ONLY_PATHS.has(path === '' ? key : `${path}.${key}`)) continue;
       const found = firstDifference(a[key], b[key], path === '' ? key : `${path}.${key}`);
       if (found) return found;
     }

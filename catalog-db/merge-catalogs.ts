@@ -3,16 +3,24 @@
 // commit, is reused, so merging the same shard twice adds nothing); for a family id present twice the
 // copy whose run finished later wins (an unfinished run counts as oldest; on a tie the copy already in
 // the output stays); a system present twice must agree on its physical constants and letters; meta
-// keys already set in the output are kept, but a different scenario name is refused. Each input is
-// merged in its own transaction: a failing input leaves the inputs merged before it in place.
+// keys already set in the output are kept, but a different scenario name is refused; a job done in
+// both with different settings (other tolerances, limits, seed rule: another config) is refused. Each
+// input is merged in its own transaction: a failing input leaves the inputs merged before it in place.
 import { resolve } from 'node:path';
 import type { Database } from 'better-sqlite3';
+import { firstSettingDifference, formatSettingDifference } from './job-settings.ts';
 import { openSqliteForRead, openSqliteForWrite } from './open-sqlite.ts';
 import { createCatalogReader } from './query.ts';
 import { prepareReplaceFamily } from './replace-family.ts';
 import type { SqlRecord } from './row-mapping.ts';
+import { firstSystemConstantDifference } from './system-constants.ts';
 import { runTable, systemTable } from './table-columns.ts';
-import type { CatalogReader, RunRow, SystemRow } from './types.ts';
+import type { CatalogReader, RunRow, StoredJobSettings, SystemRow } from './types.ts';
+
+/** The inputs do not belong together (other physics, scenario or job settings): bad input, not a failure. */
+export class MergeRefusedError extends Error {
+  override name = 'MergeRefusedError';
+}
 
 export interface MergeInputReport {
   path: string;
@@ -26,17 +34,6 @@ export interface MergeReport {
   outPath: string;
   inputs: MergeInputReport[];
 }
-
-/** Fields two copies of a system must agree on: they fix the physics and the lap-signature letters. */
-const systemFieldsThatMustMatch = [
-  'mu',
-  'lengthUnitKm',
-  'timeUnitS',
-  'primaryRadiusKm',
-  'secondaryRadiusKm',
-  'primaryLetter',
-  'secondaryLetter',
-] as const satisfies ReadonlyArray<keyof SystemRow>;
 
 export function mergeCatalogs(outPath: string, inPaths: readonly string[]): MergeReport {
   if (!Array.isArray(inPaths) || inPaths.length === 0) {
@@ -90,13 +87,12 @@ function prepareMergeInput(out: Database, outPath: string) {
       insertSystem.run(systemTable.toRecord(system));
       return;
     }
-    for (const field of systemFieldsThatMustMatch) {
-      if (existing[field] !== system[field]) {
-        throw new Error(
-          `mergeCatalogs: system ${system.id} differs between ${outPath} and ${inPath} ` +
-            `(${field}: ${existing[field]} vs ${system[field]})`,
-        );
-      }
+    const field = firstSystemConstantDifference(existing, system);
+    if (field !== null) {
+      throw new MergeRefusedError(
+        `mergeCatalogs: system ${system.id} differs between ${outPath} and ${inPath} ` +
+          `(${field}: ${existing[field]} vs ${system[field]})`,
+      );
     }
   };
 
@@ -119,7 +115,7 @@ function prepareMergeInput(out: Database, outPath: string) {
       const existing = outMeta.get(key) as string | undefined;
       if (existing === undefined) insertMeta.run(key, value);
       else if (key === 'scenario.name' && existing !== value) {
-        throw new Error(`mergeCatalogs: scenario name differs: "${existing}" in ${outPath}, "${value}" in ${inPath}`);
+        throw new MergeRefusedError(`mergeCatalogs: scenario name differs: "${existing}" in ${outPath}, "${value}" in ${inPath}`);
       }
     }
   };
@@ -129,6 +125,8 @@ function prepareMergeInput(out: Database, outPath: string) {
     const report: MergeInputReport = { path: inPath, runsAdded: 0, familiesWritten: 0, familiesSkipped: 0, jobsMerged: 0 };
     mergeMeta(input, inPath);
     for (const system of reader.systems()) mergeSystem(system, inPath);
+    const jobs = reader.jobSettings();
+    assertSameJobSettings(jobs, outReader, outPath, inPath);
 
     const inRuns = new Map(reader.runs().map((run) => [run.id, run]));
     const runIdMap = new Map<number, number>();
@@ -158,7 +156,6 @@ function prepareMergeInput(out: Database, outPath: string) {
       report.familiesWritten += 1;
     }
 
-    const jobs = reader.jobSettings();
     for (const job of jobs) upsertJob.run(job.jobKey, runIdMap.get(job.runId), job.doneAt, JSON.stringify(job.settings));
     report.jobsMerged = jobs.length;
     return report;
@@ -173,6 +170,20 @@ function prepareMergeInput(out: Database, outPath: string) {
       throw new Error(`mergeCatalogs: ${inPath} not merged (${message})`, { cause: error });
     }
   };
+}
+
+/** A job done in both catalogs must have been computed with the same settings. */
+function assertSameJobSettings(jobs: StoredJobSettings[], outReader: CatalogReader, outPath: string, inPath: string): void {
+  const outJobs = new Map(outReader.jobSettings().map((job) => [job.jobKey, job]));
+  for (const job of jobs) {
+    const existing = outJobs.get(job.jobKey);
+    const difference = existing === undefined ? null : firstSettingDifference(existing.settings, job.settings);
+    if (difference === null) continue;
+    throw new MergeRefusedError(
+      `mergeCatalogs: job ${job.jobKey} differs between ${outPath} and ${inPath}: ${formatSettingDifference(difference)} ` +
+        '(computed with other settings; merge only catalogs of the same config)',
+    );
+  }
 }
 
 /** Milliseconds since 1970 of the run's end; an unfinished run counts as the oldest. */

@@ -21,6 +21,19 @@ export function createCatalogWriter(db: Database): CatalogWriter {
     'INSERT INTO jobs (job_key, run_id, done_at, settings) VALUES (?, ?, ?, ?) ' +
       'ON CONFLICT (job_key) DO UPDATE SET run_id = excluded.run_id, done_at = excluded.done_at, settings = excluded.settings',
   );
+  const deleteSystemFamilies = db.prepare('DELETE FROM families WHERE system_id = ?');
+  const deleteJobFamilies = db.prepare('DELETE FROM families WHERE config_key = ?');
+  const deleteJob = db.prepare('DELETE FROM jobs WHERE job_key = ?');
+  const forgetTransaction = db.transaction((systemIds: readonly string[], jobKeys: readonly string[]) => {
+    let families = 0;
+    let jobs = 0;
+    for (const id of systemIds) families += deleteSystemFamilies.run(id).changes;
+    for (const key of jobKeys) {
+      families += deleteJobFamilies.run(key).changes;
+      jobs += deleteJob.run(key).changes;
+    }
+    return { families, jobs };
+  });
   const replaceFamily = prepareReplaceFamily(db);
   const meta = prepareMetaStore(db);
 
@@ -68,6 +81,9 @@ export function createCatalogWriter(db: Database): CatalogWriter {
     },
     setScenario(scenario) {
       meta.setScenario(scenario);
+    },
+    forgetResults({ systemIds, jobKeys }) {
+      return forgetTransaction.immediate(systemIds, jobKeys);
     },
     close() {
       db.close();

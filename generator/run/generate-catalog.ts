@@ -11,6 +11,7 @@ import type { ProgressDisplay } from './progress-display.ts';
 import { createProgressLines } from './progress-lines.ts';
 import { generatorVersion, gitCommit, sha256Hex } from './run-provenance.ts';
 import { orderJobsByCost } from './order-jobs-by-cost.ts';
+import { settleSettingsChanges } from './settings-changes.ts';
 import { formatShard, selectShard, type Shard } from './shard.ts';
 import { createFamilyPool, defaultWorkerCount } from './worker-pool.ts';
 import { writeJobResult } from './write-job-result.ts';
@@ -27,6 +28,8 @@ export interface GenerateOptions {
   handleSigint?: boolean;
   /** 'set' (a config run) replaces the catalog's scenario; 'if-missing' (one family from the command line) keeps it. */
   scenario?: 'set' | 'if-missing';
+  /** Delete and recompute the families whose system constants or job settings the config changes (else refused). */
+  recomputeChanged?: boolean;
 }
 
 export interface GenerateSummary {
@@ -58,11 +61,13 @@ export async function generateFromConfig(loaded: LoadedConfig, options: Generate
 
   const writer = openCatalogForWrite(options.dbPath);
   try {
-    for (const system of configSystems(config)) writer.upsertSystem(system);
+    const systems = configSystems(config);
+    settleSettingsChanges({ writer, dbPath: options.dbPath, configPath, systems, jobs, recompute: options.recomputeChanged === true, log });
+    for (const system of systems) writer.upsertSystem(system);
     const earlier = readEarlierState(options.dbPath);
     const fromConfigFile = (options.scenario ?? 'set') === 'set';
     if (fromConfigFile && earlier.latestConfigHash !== null && earlier.latestConfigHash !== configHash) {
-      log(`note: the config differs from the one of run ${earlier.latestRunId}; jobs done by earlier runs are kept, not redone`);
+      log(`note: the config differs from the one of run ${earlier.latestRunId}; jobs done by earlier runs with the same settings are kept, not redone`);
     }
     if (fromConfigFile || !earlier.hasScenario) {
       writer.setScenario({ name: config.scenario.name, team: config.scenario.team, description: config.scenario.description });

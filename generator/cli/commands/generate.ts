@@ -10,6 +10,7 @@ import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { parseIntegerOption, parseNumberListOption, UsageError } from '../../run/command-line-values.ts';
 import { generateFromConfig, type GenerateSummary } from '../../run/generate-catalog.ts';
 import { INTERRUPTED_EXIT_CODE } from '../../run/interrupt-handler.ts';
+import { RECOMPUTE_OPTION } from '../../run/settings-changes.ts';
 import { shardFromOptions } from '../../run/shard-from-environment.ts';
 
 export const DEFAULT_CONFIG_PATH = 'catalogs/demo.yaml';
@@ -27,6 +28,7 @@ interface GenerateFlags {
   jacobi?: string;
   maxMembers?: string;
   progress: string;
+  recomputeChanged?: boolean;
 }
 
 export function createGenerateCommand(): Command {
@@ -43,6 +45,10 @@ export function createGenerateCommand(): Command {
     .option('--jacobi <list>', 'with --signature: Jacobi constants to scan at, comma-separated')
     .option('--max-members <n>', 'with --system: member limit of the family')
     .option('--progress <mode>', `progress display: ${PROGRESS_MODES.join(', ')}`, 'auto')
+    .option(
+      RECOMPUTE_OPTION,
+      "delete and recompute the families whose system constants or job settings differ from the catalog's (refused without it)",
+    )
     .action(async (configArg: string | undefined, flags: GenerateFlags) => {
       try {
         const summary = await generate(configArg, flags);
@@ -68,6 +74,7 @@ async function generate(configArg: string | undefined, flags: GenerateFlags): Pr
     shard,
     progress: flags.progress as (typeof PROGRESS_MODES)[number],
     scenario: single ? 'if-missing' : 'set',
+    recomputeChanged: flags.recomputeChanged === true,
   });
   const failed = summary.jobsFailed.length;
   console.log(

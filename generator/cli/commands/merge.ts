@@ -2,7 +2,7 @@
 // (created if missing). The rules for families present twice are catalog-db/merge-catalogs.ts's.
 import { existsSync } from 'node:fs';
 import { Command } from 'commander';
-import { mergeCatalogs } from '../../../catalog-db/merge-catalogs.ts';
+import { MergeRefusedError, mergeCatalogs } from '../../../catalog-db/merge-catalogs.ts';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { UsageError } from '../../run/command-line-values.ts';
 
@@ -24,7 +24,8 @@ export function createMergeCommand(): Command {
         }
         console.log(`wrote ${report.outPath}`);
       } catch (error) {
-        failWith(command, error);
+        // Inputs that do not belong together are bad input (exit 2), like a bad argument.
+        failWith(command, error instanceof MergeRefusedError ? new UsageError(error.message) : error);
       }
     });
   return exitWithUsageCode(command);
