@@ -2,6 +2,7 @@
 // One file per command in commands/; add a command by adding its factory to COMMANDS.
 import { Command } from 'commander';
 import { exitWithUsageCode } from '../run/command-exit.ts';
+import { createAuditCommand } from './commands/audit.ts';
 import { createExportCommand } from './commands/export.ts';
 import { createExportStateCommand } from './commands/export-state.ts';
 import { createGenerateCommand } from './commands/generate.ts';
@@ -13,6 +14,7 @@ import { withErrorPrefix } from './error-prefix.ts';
 const COMMANDS: Array<() => Command> = [
   createGenerateCommand,
   createVerifyCommand,
+  createAuditCommand,
   createExportCommand,
   createMergeCommand,
   createPropagateCommand,

@@ -1,11 +1,2 @@
-/** Mulberry32: a small seeded PRNG (common practice), so that "random" test states are the same every run. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+// The tests draw their "random" states from the generator's seeded PRNG, so they are the same every run.
+export { seededRandom } from '../../generator/core/random/seeded-random.ts';

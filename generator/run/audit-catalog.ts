@@ -1,0 +1,101 @@
+// `audit`: the completeness check of a catalog. Reads the lap-signature jobs and their families, draws
+// the audit levels, runs the audit of each job (core/orbits/audit-job.ts) with progress on stderr and a
+// clean stop on Ctrl-C, and stores a finished audit in the catalog's audits table. An interrupted audit
+// is not stored: the catalog stays as it was.
+import { prepareAuditStore } from '../../catalog-db/audit-store.ts';
+import type { AuditMiss, AuditRow } from '../../catalog-db/audit-types.ts';
+import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
+import { openSqliteForWrite } from '../../catalog-db/open-sqlite.ts';
+import { storedOrbitFootprint, type StoredFootprint } from '../core/orbits/audit-footprint.ts';
+import { auditJob, auditScanCount } from '../core/orbits/audit-job.ts';
+import type { AuditOrbit, LapSignatureJob } from '../core/orbits/audit-scan.ts';
+import { auditLevelsOfCatalog } from './audit-levels-of-catalog.ts';
+import { lapSignatureJobsOf } from './audit-jobs-of-catalog.ts';
+import { createRateProgress } from './rate-progress.ts';
+
+export interface AuditOptions {
+  dbPath: string;
+  levelsPerSystem: number;
+  seed: number;
+  log?: (line: string) => void;
+  shouldStop?: () => boolean;
+}
+
+export interface AuditReport extends Omit<AuditRow, 'id'> {
+  interrupted: boolean;
+  /** Id of the stored audit row (absent when interrupted). */
+  auditId?: number;
+}
+
+interface JobWork {
+  job: LapSignatureJob;
+  families: StoredFootprint[][];
+}
+
+function missOf(job: LapSignatureJob, orbit: AuditOrbit): AuditMiss {
+  return {
+    jobKey: job.key, systemId: job.system.id, signature: job.seed.signature, segment: orbit.segment,
+    direction: orbit.direction, halfCrossings: orbit.halfCrossings, jacobi: orbit.jacobi, periodNd: orbit.periodNd,
+    state0: [orbit.x0, 0, 0, 0, orbit.vy0, 0], xHalf: orbit.xHalf,
+  };
+}
+
+/** Each job with the footprints of its families' stored members (one half-period propagation each). */
+function readJobWork(dbPath: string, log: (line: string) => void): JobWork[] {
+  const reader = openCatalogForRead(dbPath);
+  try {
+    const jobs = lapSignatureJobsOf(reader.jobSettings());
+    const families = reader.families();
+    const work = jobs.map((job) => ({ job, families: [] as StoredFootprint[][] }));
+    const total = families.filter((f) => jobs.some((j) => j.key === f.configKey)).reduce((sum, f) => sum + f.memberCount, 0);
+    const progress = createRateProgress('audit: stored members measured', total, log);
+    let done = 0;
+    for (const entry of work) {
+      for (const family of families.filter((f) => f.configKey === entry.job.key)) {
+        entry.families.push(reader.orbits(family.id).map((o) => storedOrbitFootprint(entry.job.system.mu, o.state0, o.period, entry.job.tolerance)));
+        done += family.memberCount;
+        progress.step(done, family.id);
+      }
+    }
+    return work;
+  } finally {
+    reader.close();
+  }
+}
+
+export function auditCatalog(options: AuditOptions): AuditReport {
+  const startMs = Date.now();
+  const log = options.log ?? ((line: string) => process.stderr.write(`${line}\n`));
+  const work = readJobWork(options.dbPath, log);
+  const levels = auditLevelsOfCatalog(work.map((w) => w.job), options.levelsPerSystem, options.seed);
+  const total = work.reduce((sum, w) => sum + auditScanCount(w.job, levels[w.job.system.id]), 0);
+  const progress = createRateProgress('audit: scans (level × segment × direction)', total, log);
+  const misses: AuditMiss[] = [];
+  let orbitsChecked = 0;
+  let scansBefore = 0;
+  let interrupted = false;
+  for (const { job, families } of work) {
+    const result = auditJob({ job, levels: levels[job.system.id], families }, {
+      onScan: (done, _total, label) => progress.step(scansBefore + done, label),
+      shouldStop: options.shouldStop,
+    });
+    scansBefore += auditScanCount(job, levels[job.system.id]);
+    orbitsChecked += result.orbitsChecked;
+    misses.push(...result.misses.map((orbit) => missOf(job, orbit)));
+    if (result.interrupted) {
+      interrupted = true;
+      break;
+    }
+  }
+  const audit: Omit<AuditRow, 'id'> = {
+    finishedAt: new Date().toISOString(), seconds: (Date.now() - startMs) / 1000, seed: options.seed,
+    levelsPerSystem: options.levelsPerSystem, levels, jobsAudited: work.length, orbitsChecked, misses,
+  };
+  if (interrupted) return { ...audit, interrupted };
+  const db = openSqliteForWrite(options.dbPath);
+  try {
+    return { ...audit, interrupted, auditId: prepareAuditStore(db).writeAudit(audit) };
+  } finally {
+    db.close();
+  }
+}
