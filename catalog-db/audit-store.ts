@@ -21,6 +21,7 @@ function fromRecord(record: SqlRecord): AuditRow {
     seconds: record.seconds as number,
     seed: record.seed as number,
     levelsPerSystem: record.levels_per_system as number,
+    gridFactor: record.grid_factor as number,
     levels: JSON.parse(record.levels as string) as AuditRow['levels'],
     jobsAudited: record.jobs_audited as number,
     orbitsChecked: record.orbits_checked as number,
@@ -47,8 +48,8 @@ export function prepareAuditStore(db: Database): AuditStore {
   const latest = db.prepare(`${SELECT_NEWEST} LIMIT 1`);
   const insert = db.readonly
     ? undefined
-    : db.prepare(`INSERT INTO audits (finished_at, seconds, seed, levels_per_system, levels, jobs_audited, orbits_checked,
-        miss_count, misses) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)`);
+    : db.prepare(`INSERT INTO audits (finished_at, seconds, seed, levels_per_system, grid_factor, levels, jobs_audited,
+        orbits_checked, miss_count, misses) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`);
   return {
     audits: () => (newest.all() as SqlRecord[]).map(fromRecord),
     latestAudit: () => {
@@ -58,7 +59,7 @@ export function prepareAuditStore(db: Database): AuditStore {
     writeAudit(audit) {
       if (insert === undefined) throw new Error('writeAudit: the catalog is open read-only');
       const json = checkedJson(audit);
-      const result = insert.run(audit.finishedAt, audit.seconds, audit.seed, audit.levelsPerSystem, json.levels,
+      const result = insert.run(audit.finishedAt, audit.seconds, audit.seed, audit.levelsPerSystem, audit.gridFactor, json.levels,
         audit.jobsAudited, audit.orbitsChecked, audit.misses.length, json.misses);
       return Number(result.lastInsertRowid);
     },

@@ -23,6 +23,8 @@ export interface AuditRow {
   /** Seed of the level draw (the same seed and catalog give the same levels). */
   seed: number;
   levelsPerSystem: number;
+  /** The audit's scan grid was this many times as dense as each job's. */
+  gridFactor: number;
   /** Jacobi levels scanned, per system id. */
   levels: Record<string, number[]>;
   jobsAudited: number;

@@ -165,6 +165,8 @@ CREATE TABLE audits (
   seconds           REAL NOT NULL CHECK (seconds >= 0),
   seed              INTEGER NOT NULL,
   levels_per_system INTEGER NOT NULL CHECK (levels_per_system > 0),
+  -- the audit's x-axis scan had grid_factor times each job's start points
+  grid_factor       REAL NOT NULL CHECK (grid_factor > 0),
   levels            TEXT NOT NULL CHECK (json_type(levels) = 'object'),
   jobs_audited      INTEGER NOT NULL CHECK (jobs_audited >= 0),
   orbits_checked    INTEGER NOT NULL CHECK (orbits_checked >= 0),

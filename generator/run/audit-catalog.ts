@@ -17,9 +17,14 @@ export interface AuditOptions {
   dbPath: string;
   levelsPerSystem: number;
   seed: number;
+  /** Scan grid density relative to each job's (default DEFAULT_GRID_FACTOR). */
+  gridFactor?: number;
   log?: (line: string) => void;
   shouldStop?: () => boolean;
 }
+
+/** Four times the job's start points: fine enough to split the close root pairs a job's grid can miss. */
+export const DEFAULT_GRID_FACTOR = 4;
 
 export interface AuditReport extends Omit<AuditRow, 'id'> {
   interrupted: boolean;
@@ -65,6 +70,7 @@ function readJobWork(dbPath: string, log: (line: string) => void): JobWork[] {
 
 export function auditCatalog(options: AuditOptions): AuditReport {
   const startMs = Date.now();
+  const gridFactor = options.gridFactor ?? DEFAULT_GRID_FACTOR;
   const log = options.log ?? ((line: string) => process.stderr.write(`${line}\n`));
   const work = readJobWork(options.dbPath, log);
   const levels = auditLevelsOfCatalog(work.map((w) => w.job), options.levelsPerSystem, options.seed);
@@ -75,7 +81,7 @@ export function auditCatalog(options: AuditOptions): AuditReport {
   let scansBefore = 0;
   let interrupted = false;
   for (const { job, families } of work) {
-    const result = auditJob({ job, levels: levels[job.system.id], families }, {
+    const result = auditJob({ job, levels: levels[job.system.id], families, gridFactor }, {
       onScan: (done, _total, label) => progress.step(scansBefore + done, label),
       shouldStop: options.shouldStop,
     });
@@ -89,7 +95,7 @@ export function auditCatalog(options: AuditOptions): AuditReport {
   }
   const audit: Omit<AuditRow, 'id'> = {
     finishedAt: new Date().toISOString(), seconds: (Date.now() - startMs) / 1000, seed: options.seed,
-    levelsPerSystem: options.levelsPerSystem, levels, jobsAudited: work.length, orbitsChecked, misses,
+    levelsPerSystem: options.levelsPerSystem, gridFactor, levels, jobsAudited: work.length, orbitsChecked, misses,
   };
   if (interrupted) return { ...audit, interrupted };
   const db = openSqliteForWrite(options.dbPath);

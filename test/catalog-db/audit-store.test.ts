@@ -10,7 +10,7 @@ const catalogPath = useTempCatalogDir();
 
 function audit(finishedAt: string, misses: AuditRow['misses'] = []): Omit<AuditRow, 'id'> {
   return {
-    finishedAt, seconds: 12.5, seed: 4242, levelsPerSystem: 2,
+    finishedAt, seconds: 12.5, seed: 4242, levelsPerSystem: 2, gridFactor: 4,
     levels: { 'earth-moon': [3.1234567890123, 3.15], 'pluto-charon': [3.6, 3.7] },
     jobsAudited: 3, orbitsChecked: 17, misses,
   };

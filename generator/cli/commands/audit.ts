@@ -6,7 +6,7 @@
 import { existsSync } from 'node:fs';
 import { Command } from 'commander';
 import type { AuditMiss } from '../../../catalog-db/audit-types.ts';
-import { auditCatalog } from '../../run/audit-catalog.ts';
+import { auditCatalog, DEFAULT_GRID_FACTOR } from '../../run/audit-catalog.ts';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { parseIntegerOption, UsageError } from '../../run/command-line-values.ts';
 import { handleInterrupts, INTERRUPTED_EXIT_CODE } from '../../run/interrupt-handler.ts';
@@ -15,8 +15,9 @@ const DEFAULT_DB_PATH = 'catalog-db/demo.sqlite';
 export const DEFAULT_AUDIT_LEVELS = 6;
 const MAX_AUDIT_LEVELS = 1000;
 const MAX_SEED = 2 ** 32 - 1;
+const MAX_GRID_FACTOR = 64;
 
-const formatState = (state: readonly number[]) => `[${state.map((v) => v.toPrecision(15)).join(', ')}]`;
+const formatState = (state: readonly number[]) => `[${state.map((v) => (v === 0 ? '0' : v.toPrecision(15))).join(', ')}]`;
 
 export function formatMiss(miss: AuditMiss): string {
   return `  ${miss.jobKey} (${miss.signature}): not on any family: C ${miss.jacobi.toFixed(10)}, period ${miss.periodNd.toFixed(8)} TU, ` +
@@ -29,18 +30,20 @@ export function createAuditCommand(): Command {
     .description('check completeness: scan random Jacobi levels discovery did not use and list symmetric orbits on no catalogued family')
     .option('--db <file>', 'catalog file to audit (the audit is stored in it)', DEFAULT_DB_PATH)
     .option('--levels <n>', `random Jacobi levels per system (default ${DEFAULT_AUDIT_LEVELS})`)
+    .option('--grid-factor <f>', `scan with f times each job's start points per segment (default ${DEFAULT_GRID_FACTOR})`)
     .option('--seed <s>', 'seed of the level draw, to repeat an audit (default: from the clock, printed)')
-    .action((flags: { db: string; levels?: string; seed?: string }) => {
+    .action((flags: { db: string; levels?: string; seed?: string; gridFactor?: string }) => {
       try {
         const levelsPerSystem = flags.levels === undefined ? DEFAULT_AUDIT_LEVELS : parseIntegerOption('--levels', flags.levels, 1, MAX_AUDIT_LEVELS);
         const seed = flags.seed === undefined ? Date.now() % (MAX_SEED + 1) : parseIntegerOption('--seed', flags.seed, 0, MAX_SEED);
+        const gridFactor = flags.gridFactor === undefined ? DEFAULT_GRID_FACTOR : parseIntegerOption('--grid-factor', flags.gridFactor, 1, MAX_GRID_FACTOR);
         if (!existsSync(flags.db)) throw new UsageError(`--db: "${flags.db}" does not exist (a catalog file written by generate)`);
-        console.log(`audit of ${flags.db}: ${levelsPerSystem} level(s) per system, seed ${seed} (repeat with --seed ${seed})`);
+        console.log(`audit of ${flags.db}: ${levelsPerSystem} level(s) per system, ${gridFactor}× each job's scan grid, seed ${seed} (repeat with --seed ${seed})`);
         let stop = false;
         const removeHandler = handleInterrupts(() => (stop = true), (line) => process.stderr.write(`${line}\n`));
         const report = (() => {
           try {
-            return auditCatalog({ dbPath: flags.db, levelsPerSystem, seed, shouldStop: () => stop });
+            return auditCatalog({ dbPath: flags.db, levelsPerSystem, seed, gridFactor, shouldStop: () => stop });
           } finally {
             removeHandler();
           }

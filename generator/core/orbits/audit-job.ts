@@ -12,6 +12,8 @@ export interface JobAuditInput {
   levels: readonly number[];
   /** Members of each catalogued family of the job, in family order. */
   families: readonly (readonly StoredFootprint[])[];
+  /** Scan grid density relative to the job's (audit-scan.ts). */
+  gridFactor: number;
 }
 
 export interface JobAuditResult {
@@ -45,7 +47,7 @@ export function auditScanCount(job: LapSignatureJob, levels: readonly number[]):
 
 export function auditJob(input: JobAuditInput, hooks: AuditHooks = {}): JobAuditResult {
   const { job } = input;
-  const context = auditContext(job);
+  const context = auditContext(job, input.gridFactor);
   const total = auditScanCount(job, input.levels);
   const checked: AuditOrbit[] = [];
   const misses: AuditOrbit[] = [];

@@ -30,11 +30,17 @@ export interface AuditContext {
   corrector: CorrectorOptions;
   scan: ScanOptions;
   laps: LapCounts;
+  /** Start points per segment: the job's times the audit's grid factor. */
+  gridPoints: number;
   primaryRadiusNd: number;
   secondaryRadiusNd: number;
 }
 
-export function auditContext(job: LapSignatureJob): AuditContext {
+/**
+ * The audit scans a grid `gridFactor` times as dense as the job's: a coarse grid misses pairs of roots that
+ * fall in one cell (no sign change between them), and the audit must not share discovery's blind spots.
+ */
+export function auditContext(job: LapSignatureJob, gridFactor: number): AuditContext {
   const { system, limits, tolerance } = job;
   const laps = parseSignature(job.seed.signature, system.primaryLetter, system.secondaryLetter);
   if (!laps) throw new RangeError(`${job.key}: signature must look like ${system.primaryLetter}2${system.secondaryLetter}1, got "${job.seed.signature}"`);
@@ -52,6 +58,7 @@ export function auditContext(job: LapSignatureJob): AuditContext {
     },
     scan: { ...loose, maxHalfTimeNd: limits.maxPeriodNd / 2, primaryRadiusNd, secondaryRadiusNd, xL1, reachNd: 1.2 },
     laps,
+    gridPoints: Math.round(gridFactor * job.seed.gridPoints),
     primaryRadiusNd,
     secondaryRadiusNd,
   };
@@ -62,7 +69,7 @@ const sameLaps = (a: LapCounts, b: LapCounts) => a.primaryLaps === b.primaryLaps
 export function auditScan(context: AuditContext, jacobi: number, segment: AxisSegment, direction: 1 | -1): AuditOrbit[] {
   const { job, analysis, corrector, laps } = context;
   const mu = job.system.mu;
-  const candidates = cachedScan(mu, jacobi, segment, direction, job.seed.maxHalfCrossings, job.seed.gridPoints, context.scan);
+  const candidates = cachedScan(mu, jacobi, segment, direction, job.seed.maxHalfCrossings, context.gridPoints, context.scan);
   const found: AuditOrbit[] = [];
   for (const c of candidates) {
     const screen = screenOrbit(analysis, c.x0, c.vy0, 2 * c.tHalfNd);
