@@ -1,6 +1,7 @@
 // Read side of the catalog (CatalogReader) over an open connection; statements are prepared once
 // because the site build calls orbits(familyId) once per family page.
 import type { Database } from 'better-sqlite3';
+import { prepareAuditStore } from './audit-store.ts';
 import { prepareMetaStore } from './meta.ts';
 import type { SqlRecord } from './row-mapping.ts';
 import {
@@ -47,6 +48,7 @@ export function createCatalogReader(db: Database): CatalogReader {
     jobs: all('SELECT job_key, run_id, done_at, settings FROM jobs ORDER BY job_key'),
   };
   const meta = prepareMetaStore(db);
+  const auditStore = prepareAuditStore(db);
   return {
     systems: () => q.systems().map(systemTable.fromRecord),
     runs: () => q.runs().map(runTable.fromRecord),
@@ -75,6 +77,8 @@ export function createCatalogReader(db: Database): CatalogReader {
           settings: JSON.parse(record.settings as string) as StoredJobSettings['settings'],
         }),
       ),
+    audits: () => auditStore.audits(),
+    latestAudit: () => auditStore.latestAudit(),
     close: () => db.close(),
   };
 }

@@ -1,5 +1,7 @@
+import type { AuditRow } from './audit-types.ts';
 import type { HoldRadiusRow, ModelScreeningRow } from './screening-types.ts';
 export type { HoldRadiusRow, ModelScreeningRow, ScreeningModelName, OrbitScreenings } from './screening-types.ts';
+export type { AuditMiss, AuditRow } from './audit-types.ts';
 
 // Row shapes of the SQLite catalog, shared by the generator (writes) and the site (reads).
 // Lengths and times are nondimensional unless the name carries a unit (Km, Days, S).
@@ -166,6 +168,10 @@ export interface CatalogReader {
   scenario(): ScenarioMeta | null; // null until setScenario has been called
   /** Every done job with the settings it was computed with, ordered by jobKey. */
   jobSettings(): StoredJobSettings[];
+  /** Completeness audits (`cycler-atlas audit`), newest first. */
+  audits(): AuditRow[];
+  /** The newest audit; undefined for a catalog never audited. */
+  latestAudit(): AuditRow | undefined;
   close(): void;
 }
 

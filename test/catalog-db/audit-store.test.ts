@@ -1,8 +1,11 @@
 // The audits table (schema version 3): a finished audit is stored and read back as written, newest
-// first, and values SQLite or JSON cannot keep are refused with the field named (common practice).
+// first (also through the catalog reader, and in the home page's one-line summary), and values SQLite or
+// JSON cannot keep are refused with the field named (common practice).
 import { describe, expect, it } from 'vitest';
 import { prepareAuditStore } from '../../catalog-db/audit-store.ts';
 import type { AuditRow } from '../../catalog-db/audit-types.ts';
+import { auditSummary, readLatestAudit } from '../../catalog-db/latest-audit.ts';
+import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
 import { openSqliteForRead, openSqliteForWrite } from '../../catalog-db/open-sqlite.ts';
 import { useTempCatalogDir } from './temp-catalog-path.ts';
 
@@ -33,12 +36,21 @@ describe('audits table', () => {
     expect(read.audits().map((a) => a.id)).toEqual([second, first]);
     expect(read.latestAudit()).toEqual({ id: second, ...audit('2026-01-02T00:00:00.000Z', [miss]) });
     expect(() => read.writeAudit(audit('2026-01-03T00:00:00.000Z'))).toThrow('writeAudit: the catalog is open read-only');
+    const reader = openCatalogForRead(path);
+    expect(reader.audits().map((a) => a.id)).toEqual([second, first]);
+    expect(reader.latestAudit()?.misses).toEqual([miss]);
+    reader.close();
+    // The summary counts the levels of every system (2 + 2) and says how many orbits are missing.
+    expect(auditSummary(readLatestAudit(path))).toBe(
+      'Completeness audit of 2026-01-02: 17 symmetric orbits found afresh at 4 random Jacobi levels (seed 4242) for 3 lap signatures; 1 lies on no catalogued family.',
+    );
   });
 
   it('gives undefined for a catalog never audited', () => {
     const db = openSqliteForWrite(catalogPath('empty.sqlite'));
     expect(prepareAuditStore(db).latestAudit()).toBeUndefined();
     db.close();
+    expect(auditSummary(readLatestAudit(catalogPath('empty.sqlite')))).toBe('Completeness audit: not run on this catalog yet (cycler-atlas audit).');
   });
 
   it('refuses a NaN in a miss and a bad date, naming the field, and writes nothing', () => {
