@@ -15,6 +15,7 @@ const BENCHES: BenchModule[] = [
   { name: 'beyond-screenings', load: () => import('./beyond-screenings.ts') },
   { name: 'beyond-demo', load: () => import('./beyond-demo.ts') },
   { name: 'site-build', load: () => import('./site-build.ts') },
+  { name: 'audit', load: () => import('./audit.ts') },
 ];
 
 const filters = process.argv.slice(2).filter((a) => a !== '--');

@@ -19,5 +19,5 @@ export function auditSummary(audit: AuditRow | undefined): string {
     ? 'every one lies on a catalogued family'
     : `${audit.misses.length} ${audit.misses.length === 1 ? 'lies' : 'lie'} on no catalogued family`;
   return `Completeness audit of ${audit.finishedAt.slice(0, 10)}: ${audit.orbitsChecked} symmetric orbits found afresh at ${levels} random ` +
-    `Jacobi levels (seed ${audit.seed}) for ${audit.jobsAudited} lap signatures; ${verdict}.`;
+    `Jacobi levels (seed ${audit.seed}) for ${audit.jobsAudited} lap signature${audit.jobsAudited === 1 ? '' : 's'}; ${verdict}.`;
 }

@@ -4,7 +4,8 @@
 // - on a copy with the E1M1 family deleted it exits 1 and prints the orbits it found, which lie on the
 //   deleted family (mirror theorem, Roy & Ovenden 1955: each is a symmetric periodic orbit of that family);
 // - membership holds at either perpendicular crossing: an orbit re-corrected from its other crossing
-//   (mirror theorem) is on the family, and so is one between members of a thinned family (refinement).
+//   (mirror theorem) is on the family, and so is one between members of a thinned family (refinement);
+// - stopped (Ctrl-C) after its first scan, it says so and stores nothing (common practice).
 import { spawn } from 'node:child_process';
 import { copyFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
@@ -20,6 +21,7 @@ import { liesOnCatalogFamily } from '../../generator/core/orbits/audit-membershi
 import { auditContext, type AuditOrbit } from '../../generator/core/orbits/audit-scan.ts';
 import { correctAtFixedX0 } from '../../generator/core/orbits/correct-on-arc.ts';
 import { propagate } from '../../generator/core/propagation/propagate.ts';
+import { auditCatalog } from '../../generator/run/audit-catalog.ts';
 import { lapSignatureJobsOf } from '../../generator/run/audit-jobs-of-catalog.ts';
 import { generateCatalog } from '../../generator/run/generate-catalog.ts';
 import { useTempCatalogDir } from '../catalog-db/temp-catalog-path.ts';
@@ -103,6 +105,15 @@ describe('cycler-atlas audit', () => {
       expect(liesOnCatalogFamily(context, orbit, [members])).toBe(true);
       expect(liesOnCatalogFamily(context, orbit, [])).toBe(false);
     }
+  });
+
+  it('stops when asked between scans and leaves the catalog as it was', () => {
+    const before = storedAudits(completePath).length;
+    let polls = 0;
+    const report = auditCatalog({ dbPath: completePath, levelsPerSystem: 3, seed: 5, log: () => {}, shouldStop: () => polls++ > 0 });
+    expect(report.interrupted).toBe(true);
+    expect(report.auditId).toBeUndefined();
+    expect(storedAudits(completePath)).toHaveLength(before);
   });
 
   it('counts an orbit corrected from its other perpendicular crossing, and one between thinned members, as on the family', () => {
