@@ -10,6 +10,7 @@ import { formatNumber, formatRange, formatValue } from './format-value.ts';
 import { parseLapSignature } from './lap-signature-pattern.ts';
 import { resolveSystem } from './resolve-system.ts';
 import { systemJacobiBounds, type SystemJacobiBounds } from './system-jacobi-bounds.ts';
+import { DEFAULT_SEARCH, defaultJacobiLimits } from './default-settings.ts';
 
 export function checkConfigSemantics(config: CatalogConfig): ConfigIssue | null {
   const systems = new Map<string, { spec: SystemSpec; bounds: SystemJacobiBounds }>();
@@ -63,6 +64,8 @@ function checkFamily(config: CatalogConfig, index: number, entry: FamilyEntry, s
         message: `${formatValue(entry.signature)} is not a lap signature ${p}<n>${s}<m> for ${spec.id} (n and m integers from 1 to ${MAX_SIGNATURE_LAPS}, e.g. ${p}2${s}1)`,
       };
     }
+    const lowestIssue = checkGridLowest(config, index, entry, bounds);
+    if (lowestIssue) return lowestIssue;
     const search = resolveSearch(config, index, bounds);
     const jacobiIssue = checkScanLevels(search.jacobi, spec.id, bounds);
     if (jacobiIssue) return jacobiIssue;
@@ -93,12 +96,31 @@ function checkFamily(config: CatalogConfig, index: number, entry: FamilyEntry, s
   return null;
 }
 
+/** The lowest grid level must lie below the highest, C(L1) − gap. */
+function checkGridLowest(config: CatalogConfig, index: number, entry: FamilyEntry, bounds: SystemJacobiBounds): ConfigIssue | null {
+  if (!('signature' in entry)) return null;
+  const shared = config.defaults?.search ?? {};
+  const gap = entry.jacobiGapBelowL1 ?? shared.jacobiGapBelowL1 ?? DEFAULT_SEARCH.jacobiGapBelowL1;
+  const [lowest, path]: [number, ConfigPath] = entry.jacobiLowest !== undefined
+    ? [entry.jacobiLowest, ['families', index, 'jacobiLowest']]
+    : shared.jacobiLowest !== undefined
+      ? [shared.jacobiLowest, ['defaults', 'search', 'jacobiLowest']]
+      : [resolveLimits(config, index, bounds).limits.jacobiMin, ['families', index, 'limits', 'jacobiMin']];
+  const floor = defaultJacobiLimits('lap-signature', bounds).jacobiMin;
+  if (lowest >= floor && lowest < bounds.l1 - gap) return null;
+  return {
+    path,
+    message: `${formatNumber(lowest)} is outside the allowed range ${formatRange(floor, bounds.l1 - gap, false, true, 5)} for the lowest discovery level (from C(L4) − 1 to C(L1) − jacobiGapBelowL1)`,
+  };
+}
+
 function checkScanLevels(jacobi: Sourced<number[]>, systemId: string, bounds: SystemJacobiBounds): ConfigIssue | null {
+  const floor = defaultJacobiLimits('lap-signature', bounds).jacobiMin;
   for (const [i, value] of jacobi.value.entries()) {
-    if (!(value > bounds.l3 && value < bounds.l1)) {
+    if (!(value >= floor && value < bounds.l1)) {
       return {
         path: [...(jacobi.path ?? ['jacobi']), i],
-        message: `${formatNumber(value)} is outside the allowed range ${formatRange(bounds.l3, bounds.l1, true, true, 5)} for ${systemId} (between the L3 and L1 Jacobi constants)`,
+        message: `${formatNumber(value)} is outside the allowed range ${formatRange(floor, bounds.l1, false, true, 5)} for ${systemId} (from C(L4) − 1 up to the L1 Jacobi constant)`,
       };
     }
   }

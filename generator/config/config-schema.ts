@@ -75,10 +75,13 @@ const searchFields = {
   directions: list(direction, 1, 2, 'start directions of ẏ: 1, -1').optional(),
   maxHalfCrossings: count(64).optional(),
   gridPoints: count(100_000, 2).optional(),
+  jacobiLevels: count(2_000, 2).optional(),
+  jacobiLowest: jacobiValue.optional(),
+  jacobiGapBelowL1: ruledNumber({ min: 1e-9, max: 1, note: 'C(L1) − C of the highest grid level' }).optional(),
 };
 
 export const searchSchema = strictObject(
-  { ...searchFields, jacobi: list(jacobiValue, 1, 100, 'Jacobi constants to scan at').optional() },
+  { ...searchFields, jacobi: list(jacobiValue, 1, 2_000, 'Jacobi levels of the grid (overrides jacobiLevels)').optional() },
   'search settings',
 );
 
@@ -94,7 +97,7 @@ export const signatureFamilySchema = strictObject(
   {
     ...familyCommon,
     signature: text('a lap signature such as E2M1', 12),
-    jacobi: list(jacobiValue, 1, 100, 'Jacobi constants to scan at').optional(),
+    jacobi: list(jacobiValue, 1, 2_000, 'Jacobi levels of the grid (overrides jacobiLevels)').optional(),
     ...searchFields,
   },
   'a lap-signature family',

@@ -2,6 +2,7 @@
 // Rough first values, meant to be tuned: modest enough that the demo runs in minutes.
 import type { AxisSegment, FamilyLimits, ScreeningSettings } from '../core/orbits/family-job.ts';
 import type { SystemJacobiBounds } from './system-jacobi-bounds.ts';
+import { jacobiGridLevels } from '../core/orbits/discovery/jacobi-grid-levels.ts';
 
 export const DEFAULT_TOLERANCE = { rtol: 1e-12, atol: 1e-12 } as const;
 
@@ -14,23 +15,40 @@ export interface SearchSettings {
   segments: AxisSegment[];
   directions: Array<1 | -1>;
   maxHalfCrossings: number;
+  /** Start points per segment of the discovery grid. */
   gridPoints: number;
+  /** Jacobi levels of the discovery grid, uniform in log(C(L1) − C). */
+  jacobiLevels: number;
+  /** C(L1) − C of the highest level. */
+  jacobiGapBelowL1: number;
 }
 
+/**
+ * Discovery grid: 300 start points per segment and 64 levels from the lowest C of the family limits up
+ * to 1e-5 below C(L1). Doubling either (128 × 300, 64 × 600) finds the same Earth–Moon families of every
+ * signature E1M1…E3M3 (bench/discovery-convergence.ts); the grid costs about 20 s per system on 2 cores.
+ */
 export const DEFAULT_SEARCH: SearchSettings = {
   segments: [...ALL_SEGMENTS],
   directions: [1, -1],
   maxHalfCrossings: 6,
-  gridPoints: 120,
+  gridPoints: 300,
+  jacobiLevels: 64,
+  jacobiGapBelowL1: 1e-5,
 };
 
 /** The limits that do not depend on the system (the Jacobi range does; see defaultJacobiLimits). */
 export type SystemFreeLimits = Omit<FamilyLimits, 'jacobiMin' | 'jacobiMax'>;
 
+/**
+ * A family ends for a reason of its own (continue-family.ts); the member limit is only a safety valve,
+ * far above any demo family (the longest has well under a thousand members), and the unstable stop is
+ * off unless a config asks for it.
+ */
 export const DEFAULT_LIMITS: SystemFreeLimits = {
-  maxMembers: 150,
+  maxMembers: 5000,
   maxPeriodNd: 40,
-  unstableStop: { indexAbove: 1000, members: 30 },
+  unstableStop: null,
   initialStepNd: 1e-3,
   maxStepNd: 2e-2,
 };
@@ -49,9 +67,9 @@ export function defaultJacobiLimits(kind: FamilyEntryKind, bounds: SystemJacobiB
   return kind === 'retrograde' ? { jacobiMin, jacobiMax: bounds.l1 + 2 } : { jacobiMin, jacobiMax: bounds.l1 };
 }
 
-/** Four scan levels evenly inside (C(L3), C(L1)), rounded to 1e-4 (still strictly inside). */
-export function defaultJacobiValues(bounds: SystemJacobiBounds): number[] {
-  return [0.2, 0.4, 0.6, 0.8].map((f) => Math.round((bounds.l3 + f * (bounds.l1 - bounds.l3)) * 1e4) / 1e4);
+/** The discovery grid's levels: from the lowest C of the family's limits to just below C(L1). */
+export function defaultJacobiValues(bounds: SystemJacobiBounds, lowest: number, search: Pick<SearchSettings, 'jacobiLevels' | 'jacobiGapBelowL1'>): number[] {
+  return jacobiGridLevels({ jacobiL1: bounds.l1, lowest, gapBelowL1: search.jacobiGapBelowL1, count: search.jacobiLevels });
 }
 
 /**

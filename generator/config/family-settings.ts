@@ -80,7 +80,7 @@ export function resolveLimits(config: CatalogConfig, index: number, bounds: Syst
       jacobiMin: jacobiMin.value,
       jacobiMax: jacobiMax.value,
       maxPeriodNd: choose('maxPeriodNd', DEFAULT_LIMITS.maxPeriodNd).value,
-      unstableStop: { ...choose('unstableStop', DEFAULT_LIMITS.unstableStop).value },
+      unstableStop: choose('unstableStop', DEFAULT_LIMITS.unstableStop as NonNullable<(typeof own)['unstableStop']>).value ?? null,
       initialStepNd: initialStepNd.value,
       maxStepNd: maxStepNd.value,
     },
@@ -98,9 +98,12 @@ export interface ResolvedSearch extends SearchSettings {
 /** Search settings of a lap-signature entry: its own, else the config's defaults, else built-in ones. */
 export function resolveSearch(config: CatalogConfig, index: number, bounds: SystemJacobiBounds): ResolvedSearch {
   const entry = config.families[index] as FamilyEntry;
-  const own: Partial<SearchSettings> & { jacobi?: number[] } =
+  const own: Partial<SearchSettings> & { jacobi?: number[]; jacobiLowest?: number } =
     'signature' in entry
-      ? { segments: entry.segments, directions: entry.directions, maxHalfCrossings: entry.maxHalfCrossings, gridPoints: entry.gridPoints, jacobi: entry.jacobi }
+      ? {
+        segments: entry.segments, directions: entry.directions, maxHalfCrossings: entry.maxHalfCrossings, gridPoints: entry.gridPoints,
+        jacobi: entry.jacobi, jacobiLevels: entry.jacobiLevels, jacobiLowest: entry.jacobiLowest, jacobiGapBelowL1: entry.jacobiGapBelowL1,
+      }
       : {};
   const shared = config.defaults?.search ?? {};
   const value = <K extends keyof SearchSettings>(key: K): SearchSettings[K] =>
@@ -110,12 +113,16 @@ export function resolveSearch(config: CatalogConfig, index: number, bounds: Syst
     directions: [...value('directions')],
     maxHalfCrossings: value('maxHalfCrossings'),
     gridPoints: value('gridPoints'),
+    jacobiLevels: value('jacobiLevels'),
+    jacobiGapBelowL1: value('jacobiGapBelowL1'),
     jacobi: pick<number[]>(
       [
         [own.jacobi, ['families', index, 'jacobi']],
         [shared.jacobi, ['defaults', 'search', 'jacobi']],
       ],
-      defaultJacobiValues(bounds),
+      defaultJacobiValues(bounds, own.jacobiLowest ?? shared.jacobiLowest ?? resolveLimits(config, index, bounds).limits.jacobiMin, {
+        jacobiLevels: value('jacobiLevels'), jacobiGapBelowL1: value('jacobiGapBelowL1'),
+      }),
     ),
   };
 }

@@ -87,7 +87,11 @@ describe('buildJobs(demo config)', () => {
     const b = systemJacobiBounds(job!.system.mu);
     const levels = job!.seed.kind === 'lap-signature' ? job!.seed.jacobiValues : [];
     expect(levels.length).toBeGreaterThan(0);
-    for (const c of levels) expect(c > b.l3 && c < b.l1).toBe(true);
+    // The grid reaches from the family's lowest C up to just below C(L1), denser toward C(L1).
+    expect(levels.length).toBe(DEFAULT_SEARCH.jacobiLevels);
+    expect(levels[0]).toBeCloseTo(job!.limits.jacobiMin, 12);
+    expect(b.l1 - levels[levels.length - 1]!).toBeCloseTo(DEFAULT_SEARCH.jacobiGapBelowL1, 12);
+    for (let i = 2; i < levels.length; i++) expect(levels[i]! - levels[i - 1]!).toBeLessThan(levels[i - 1]! - levels[i - 2]!);
     const retro = singleFamilyConfig({ system: 'earth-moon', lyapunov: 'L2', maxMembers: 7 });
     expect(buildJobs(retro.config, retro.configPath)[0]).toMatchObject({ key: 'earth-moon:L2-lyapunov', limits: { maxMembers: 7 } });
   });

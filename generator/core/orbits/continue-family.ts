@@ -7,14 +7,23 @@ import type { FamilyMember } from './family-member.ts';
 
 export type EndReason =
   | 'member-limit' | 'jacobi-range' | 'period-limit' | 'collision-primary' | 'collision-secondary'
-  | 'signature-change' | 'lost-l1-passage' | 'no-convergence' | 'unstable-far-from-windows' | 'interrupted';
+  | 'brake-orbit' | 'signature-change' | 'lost-l1-passage' | 'precision-limit' | 'no-convergence'
+  | 'unstable-far-from-windows' | 'interrupted';
+
+/**
+ * Largest |ν| (either plane) of a member the catalog still trusts. Round-off in the half-period shot
+ * grows like ε·√|λ| and in the monodromy like ε·|λ| (|λ| ≈ 2|ν|): at |λ| = 1e10 the corrector's
+ * residual floor (ε·√|λ| ≈ 2e-11) meets its tolerance and the monodromy's small eigenvalue 1/λ is
+ * below round-off, so past it single shooting in double precision gives no meaningful orbit.
+ */
+export const PRECISION_LIMIT_INDEX = 5e9;
 
 export interface ContinuationRules {
   maxMembers: number;
   jacobiMin: number;
   jacobiMax: number;
   maxPeriodNd: number;
-  unstableStop: { indexAbove: number; members: number };
+  unstableStop: { indexAbove: number; members: number } | null;
   initialStepNd: number;
   maxStepNd: number;
   minStepNd: number;
@@ -47,6 +56,7 @@ export function memberFrom(context: AnalysisContext, corrected: CorrectedOrbit, 
     x0: corrected.x0,
     vy0: corrected.vy0,
     xHalf: corrected.shot.state[0],
+    vyHalf: corrected.shot.state[3],
     tHalfNd: tHalf,
     arclength,
     analysis: analyseOrbit(context, corrected.x0, corrected.vy0, 2 * tHalf),
@@ -54,13 +64,18 @@ export function memberFrom(context: AnalysisContext, corrected: CorrectedOrbit, 
   };
 }
 
-/** Why this member may not join the family, or null when it may. */
-function endReasonOf(member: FamilyMember, rules: ContinuationRules): EndReason | null {
+/** Why this member may not join the family (started with ẏ0 of sign `direction`), or null when it may. */
+function endReasonOf(member: FamilyMember, direction: number, rules: ContinuationRules): EndReason | null {
   const a = member.analysis;
+  // ẏ0 through zero: the start reached the zero-velocity curve (a brake orbit); past it the orbits
+  // start the other way round and form another family.
+  // (Reference families shrink to their equilibrium there instead: not checked for them.)
+  if (rules.laps && member.vy0 * direction <= 0) return 'brake-orbit';
   if (a.primaryMinDistanceNd < rules.primaryRadiusNd) return 'collision-primary';
   if (a.secondaryMinDistanceNd < rules.secondaryRadiusNd) return 'collision-secondary';
   if (a.jacobi < rules.jacobiMin || a.jacobi > rules.jacobiMax) return 'jacobi-range';
   if (a.periodNd > rules.maxPeriodNd) return 'period-limit';
+  if (Math.max(Math.abs(a.stabilityIndex), Math.abs(a.verticalStabilityIndex)) > PRECISION_LIMIT_INDEX) return 'precision-limit';
   if (rules.needsNeckPassage && a.l1Passages === 0) return 'lost-l1-passage';
   if (rules.laps && (a.laps.primaryLaps !== rules.laps.primaryLaps || a.laps.secondaryLaps !== rules.laps.secondaryLaps)) {
     return 'signature-change';
@@ -104,7 +119,7 @@ function march(
       if (step < rules.minStepNd) return { members, end: 'no-convergence' };
       continue;
     }
-    const reason = endReasonOf(next, rules);
+    const reason = endReasonOf(next, Math.sign(start.vy0), rules);
     if (reason) {
       // Close in on the boundary before giving up, so the family reaches as far as it truly goes.
       if (step * 0.25 >= rules.minStepNd * 64) {
@@ -119,8 +134,10 @@ function march(
     counted.n++;
     hooks.onMember?.(counted.n);
     tangent = familyTangent(corrected!.shot, tangent);
-    unstableRun = Math.abs(next.analysis.stabilityIndex) > rules.unstableStop.indexAbove ? unstableRun + 1 : 0;
-    if (unstableRun >= rules.unstableStop.members) return { members, end: 'unstable-far-from-windows' };
+    if (rules.unstableStop) {
+      unstableRun = Math.abs(next.analysis.stabilityIndex) > rules.unstableStop.indexAbove ? unstableRun + 1 : 0;
+      if (unstableRun >= rules.unstableStop.members) return { members, end: 'unstable-far-from-windows' };
+    }
     if (corrected!.iterations <= 3 && !tooFar(current, next, { ...rules, maxIndexJump: rules.maxIndexJump / 2, maxPeriodJump: rules.maxPeriodJump / 2 })) {
       step = Math.min(step * 1.5, rules.maxStepNd);
     }

@@ -1,15 +1,19 @@
 // What one unit of generator work asks for (a "job": one config entry for one system) and what it yields.
 // The run layer builds jobs from the validated config and writes the bundles to the catalog.
 import type { FamilyBundle } from '../../../catalog-db/types.ts';
+import type { DiscoveryResult } from './discovery/discover-candidates.ts';
 
 export type AxisSegment = 'far-primary' | 'between' | 'far-secondary';
 
 export type SeedRule =
   | {
-    /** Symmetric orbits of one lap signature found by scanning the x-axis at fixed Jacobi constants. */
+    /**
+     * Symmetric orbits of one lap signature, found on the zero set of the perpendicular-crossing residual
+     * over a grid of start points x0 (per segment) and Jacobi levels (discovery/).
+     */
     kind: 'lap-signature';
     signature: string; // e.g. "E2M1" (letters of the system)
-    jacobiValues: number[]; // C values to scan at (between the L3 and L1 values)
+    jacobiValues: number[]; // the grid's Jacobi levels (dense near C(L1); config: search.jacobi*)
     segments: AxisSegment[];
     /** Start direction(s) of ẏ: +1, −1. */
     directions: Array<1 | -1>;
@@ -26,8 +30,8 @@ export interface FamilyLimits {
   jacobiMin: number;
   jacobiMax: number;
   maxPeriodNd: number;
-  /** Stop following a family once |ν| has stayed above indexAbove for this many members in a row. */
-  unstableStop: { indexAbove: number; members: number };
+  /** Opt-in: stop following a family once |ν| has stayed above indexAbove for this many members in a row. */
+  unstableStop: { indexAbove: number; members: number } | null;
   initialStepNd: number; // first pseudo-arclength step
   maxStepNd: number;
 }
@@ -84,10 +88,27 @@ export interface JobProgress {
   maxMembers: number;
 }
 
+/** Progress of a job's own discovery grids (when the run layer did not share them). */
+export interface DiscoveryProgress {
+  jobKey: string;
+  gridsDone: number;
+  grids: number;
+  pointsDone: number; // of the grid in progress
+  points: number;
+}
+
 export interface JobHooks {
   onProgress?(progress: JobProgress): void;
+  onDiscovery?(progress: DiscoveryProgress): void;
+  /** A family is finished (continued, windows located, screened): the run layer may write it at once. */
+  onFamily?(bundle: FamilyBundle): void;
   /** Polled between members; true stops the job after the current member (interrupted families are marked so). */
   shouldStop?(): boolean;
+}
+
+/** What the run layer may hand a job ready-made: discovery grids shared by the jobs of a system. */
+export interface JobInputs {
+  discovered?: readonly DiscoveryResult[];
 }
 
 export interface JobResult {

@@ -6,6 +6,8 @@ export interface FamilyMember {
   vy0: number;
   /** x of the second perpendicular crossing (at T/2). */
   xHalf: number;
+  /** ẏ there (its sign is the start direction of the same orbit seen from that crossing). */
+  vyHalf: number;
   tHalfNd: number;
   arclength: number;
   analysis: OrbitAnalysis;

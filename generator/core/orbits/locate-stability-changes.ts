@@ -27,11 +27,12 @@ export interface StabilityMap {
 
 export function locateStabilityChanges(
   context: AnalysisContext, halfCrossings: number, members: readonly FamilyMember[], indexTolerance: number,
-  corrector: CorrectorOptions,
-): StabilityMap {
+  corrector: CorrectorOptions, shouldStop?: () => boolean,
+): StabilityMap | null {
   const changes: StabilityChange[] = [];
   const all: FamilyMember[] = [];
   for (let i = 0; i < members.length; i++) {
+    if (shouldStop?.()) return null; // a stop request: the family is not finished
     all.push(members[i]);
     if (i + 1 === members.length) break;
     const a = members[i], b = members[i + 1];

@@ -1,21 +1,25 @@
-// One job of the generator: find the seeds its rule asks for, continue every distinct family they start,
+// One job of the generator: find the seeds its rule asks for (lap signatures: root edges of the (x0, C)
+// discovery grids, discovery/), continue every distinct family they start,
 // locate the stability changes, screen the stable members (job.screening: screen-stable-members.ts) and
 // hand back catalog-ready bundles. Pure numerics, synchronous.
 import type { FamilyBundle, FamilyKind } from '../../../catalog-db/types.ts';
 import { lagrangePoints } from '../cr3bp/lagrange-points.ts';
-import { screenOrbit, type AnalysisContext } from './analyse-orbit.ts';
+import type { AnalysisContext } from './analyse-orbit.ts';
 import { buildFamilyBundle } from './build-family-bundle.ts';
 import { continueFamily, memberFrom, type ContinuationRules } from './continue-family.ts';
 import { correctAtFixedX0, type CorrectedOrbit, type CorrectorOptions } from './correct-on-arc.ts';
-import type { FamilyJob, JobHooks, JobResult } from './family-job.ts';
+import type { FamilyJob, JobHooks, JobInputs, JobResult } from './family-job.ts';
 import type { FamilyMember } from './family-member.ts';
 import { parseSignature } from './lap-signature.ts';
 import { footprintOf, liesOnFamily } from './lies-on-family.ts';
 import { locateStabilityChanges } from './locate-stability-changes.ts';
 import { lyapunovGuess, retrogradeGuess } from './reference-seeds.ts';
-import { cachedScan } from './cached-scan.ts';
+import { discoverCandidates, type DiscoveryResult } from './discovery/discover-candidates.ts';
+import { FamilyCoverage } from './discovery/family-coverage.ts';
+import { jobDiscoveryRequests } from './discovery/job-discovery-requests.ts';
+import { candidatesOfSignature, orderCandidates } from './discovery/order-candidates.ts';
+import { refineCandidate } from './discovery/refine-candidate.ts';
 import { screenStableMembers } from './screen-stable-members.ts';
-import type { SeedCandidate } from './scan-axis-segment.ts';
 
 interface Seed {
   corrected: CorrectedOrbit;
@@ -40,7 +44,7 @@ function betterConditionedStart(mu: number, halfCrossings: number, orbit: Correc
   return correctAtFixedX0(mu, halfCrossings, xHalf, orbit.shot.state[3], corrector);
 }
 
-export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
+export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobInputs = {}): JobResult {
   const { system, seed: rule, limits, tolerance } = job;
   const mu = system.mu;
   const [L1, L2] = lagrangePoints(mu);
@@ -70,7 +74,7 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
   const kind: FamilyKind = rule.kind === 'lap-signature' ? 'cycler'
     : rule.kind === 'lyapunov' ? (rule.point === 'L1' ? 'lyapunov-l1' : 'lyapunov-l2') : 'retrograde';
 
-  const seeds = (): Seed[] => {
+  const referenceSeeds = (): Seed[] => {
     if (rule.kind === 'lyapunov') {
       const point = rule.point === 'L1' ? L1 : L2;
       const [x0, vy0] = lyapunovGuess(mu, point.x, rule.amplitudeNd);
@@ -82,52 +86,26 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
       const corrected = correctAtFixedX0(mu, 1, x0, vy0, corrector);
       return corrected ? [{ corrected, halfCrossings: 1, segment: 'far-secondary' }] : [];
     }
-    const candidates: SeedCandidate[] = [];
-    // Scan and screen at a loose tolerance: only signs and lap counts are needed; Newton polishes later.
-    const loose = { rtol: Math.max(tolerance.rtol, 1e-10), atol: Math.max(tolerance.atol, 1e-10) };
-    const scan = {
-      ...loose, maxHalfTimeNd: limits.maxPeriodNd / 2, primaryRadiusNd,
-      secondaryRadiusNd, xL1: L1.x, reachNd: 1.2,
-    };
-    for (const jacobi of rule.jacobiValues) {
-      for (const segment of rule.segments) {
-        for (const direction of rule.directions) {
-          if (hooks.shouldStop?.()) return [];
-          candidates.push(...cachedScan(mu, jacobi, segment, direction, rule.maxHalfCrossings, rule.gridPoints, scan));
-        }
-      }
-    }
-    return candidates.flatMap((c) => {
-      const screen = screenOrbit(context, c.x0, c.vy0, 2 * c.tHalfNd);
-      if (screen.l1Passages === 0 || screen.laps.primaryLaps !== laps!.primaryLaps || screen.laps.secondaryLaps !== laps!.secondaryLaps) {
-        return [];
-      }
-      const corrected = correctAtFixedX0(mu, c.halfCrossings, c.x0, c.vy0, corrector);
-      const start = corrected && betterConditionedStart(mu, c.halfCrossings, corrected, corrector);
-      return start ? [{ corrected: start, halfCrossings: c.halfCrossings, segment: c.segment }] : [];
-    });
+    return [];
   };
 
   const bundles: FamilyBundle[] = [];
   const continued: FamilyMember[][] = [];
   const notes: string[] = [];
-  let interrupted = false;
-  for (const seed of seeds()) {
-    if (hooks.shouldStop?.()) {
-      interrupted = true;
-      break;
-    }
+  const isKnown = (m: FamilyMember) => continued.some((members) => liesOnFamily(footprintOf(m), members));
+
+  /** Continues the family of one seed; 'known' and 'rejected' tell the seed search it was fruitless. */
+  const followSeed = (seed: Seed): 'known' | 'rejected' | 'written' | 'interrupted' => {
     let start: FamilyMember;
     try {
       start = memberFrom(context, seed.corrected, 0);
     } catch {
-      continue;
+      return 'rejected';
     }
     const a = start.analysis;
-    const isKnown = (m: FamilyMember) => continued.some((members) => liesOnFamily(footprintOf(m), members));
-    if (isKnown(start)) continue;
-    if (laps && (a.laps.primaryLaps !== laps.primaryLaps || a.laps.secondaryLaps !== laps.secondaryLaps || a.l1Passages === 0)) continue;
-    if (a.primaryMinDistanceNd < primaryRadiusNd || a.secondaryMinDistanceNd < secondaryRadiusNd) continue;
+    if (isKnown(start)) return 'known';
+    if (laps && (a.laps.primaryLaps !== laps.primaryLaps || a.laps.secondaryLaps !== laps.secondaryLaps || a.l1Passages === 0)) return 'rejected';
+    if (a.primaryMinDistanceNd < primaryRadiusNd || a.secondaryMinDistanceNd < secondaryRadiusNd) return 'rejected';
 
     const letter = familyLetter(continued.length);
     const familyLabel = `${label}/${letter}`;
@@ -139,19 +117,18 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
       onMember: progress,
       shouldStop: hooks.shouldStop,
     });
-    const stopped = result.endReasonStart === 'interrupted' || result.endReasonEnd === 'interrupted';
+    if (result.endReasonStart === 'interrupted' || result.endReasonEnd === 'interrupted') return 'interrupted';
     // A seed off the known members can still lead back onto a known family (it was found beyond that
     // family's ends or between sparse members): then it is that family again.
-    if (!stopped && result.members.filter((m, i) => i % 4 === 0 && isKnown(m)).length >= 2) continue;
+    if (result.members.filter((m, i) => i % 4 === 0 && isKnown(m)).length >= 2) return 'known';
     continued.push(result.members);
-    const map = stopped
-      ? { members: result.members, changes: [], windows: [] }
-      : locateStabilityChanges(context, seed.halfCrossings, result.members, job.indexTolerance, corrector);
+    coverage?.addFamily(result.members, seed.halfCrossings);
+    const map = locateStabilityChanges(context, seed.halfCrossings, result.members, job.indexTolerance, corrector, hooks.shouldStop);
+    if (!map) return 'interrupted';
     const bundle = buildFamilyBundle(system, {
       id: `${system.id}/${label}/${letter}`, jobKey: job.key, name: rule.kind === 'lap-signature' ? `${job.name} (${letter})` : job.name, kind, signature: label, seedSegment: seed.segment,
     }, map, { start: result.endReasonStart, end: result.endReasonEnd });
-    bundles.push(bundle);
-    if (!stopped && job.screening && bundle.stableWindows.length > 0) {
+    if (job.screening && bundle.stableWindows.length > 0) {
       const screened = screenStableMembers(system, bundle, job.screening, tolerance, {
         // From the first member screened on: the displays read members 0 as "seed search".
         onMember: (done, total) => done > 0 && hooks.onProgress?.({
@@ -159,15 +136,77 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}): JobResult {
         }),
         shouldStop: hooks.shouldStop,
       });
+      if (screened.interrupted) return 'interrupted';
       bundle.holdRadii = screened.holdRadii;
       bundle.modelScreenings = screened.modelScreenings;
       notes.push(...screened.notes);
-      if (screened.interrupted) interrupted = true;
     }
-    if (stopped || interrupted) {
-      interrupted = true;
-      break;
+    // Only a finished family (continued, windows located, screened) leaves the job: a run that stops
+    // later keeps it, one that stops earlier recomputes it.
+    bundles.push(bundle);
+    hooks.onFamily?.(bundle);
+    return 'written';
+  };
+
+  let coverage: FamilyCoverage | null = null;
+  const finish = (interrupted: boolean): JobResult => (notes.length > 0 ? { bundles, interrupted, notes } : { bundles, interrupted });
+  if (rule.kind !== 'lap-signature') {
+    for (const seed of referenceSeeds()) {
+      if (hooks.shouldStop?.()) return finish(true);
+      if (followSeed(seed) === 'interrupted') return finish(true);
     }
+    return finish(false);
   }
-  return notes.length > 0 ? { bundles, interrupted, notes } : { bundles, interrupted };
+
+  const discovered = inputs.discovered ?? discoverForJob(job, hooks);
+  if (discovered === null) return finish(true);
+  coverage = new FamilyCoverage(mu, new Map(discovered.map((d) => [FamilyCoverage.gridId(d.request.segment, d.request.direction), { xs: d.xs, levels: d.request.levels }])));
+  const wanted = discovered
+    .filter((d) => rule.segments.includes(d.request.segment) && rule.directions.includes(d.request.direction))
+    .flatMap((d) => candidatesOfSignature(d.candidates, laps!, rule.maxHalfCrossings));
+  const residualOptions = {
+    rtol: Math.max(tolerance.rtol, 1e-10), atol: Math.max(tolerance.atol, 1e-10),
+    maxHalfTimeNd: limits.maxPeriodNd / 2, collisionRadiusNd: 0.5 * Math.min(primaryRadiusNd, secondaryRadiusNd),
+  };
+  const fruitless = new Map<string, { known: number; rejected: number }>();
+  for (const candidate of orderCandidates(wanted)) {
+    if (hooks.shouldStop?.()) return finish(true);
+    if (coverage.covers(candidate)) continue;
+    const piece = `${candidate.segment}${candidate.direction}:${candidate.piece}`;
+    const tries = fruitless.get(piece) ?? { known: 0, rejected: 0 };
+    if (tries.known >= MAX_KNOWN_TRIES_PER_PIECE || tries.rejected >= MAX_REJECTED_TRIES_PER_PIECE) continue;
+    const root = refineCandidate(mu, candidate, residualOptions);
+    const corrected = root && correctAtFixedX0(mu, candidate.halfCrossings, root.x0, root.vy0, corrector);
+    const start = corrected && betterConditionedStart(mu, candidate.halfCrossings, corrected, corrector);
+    const outcome = start ? followSeed({ corrected: start, halfCrossings: candidate.halfCrossings, segment: candidate.segment }) : 'rejected';
+    if (outcome === 'interrupted') return finish(true);
+    if (outcome === 'known') tries.known++;
+    if (outcome === 'rejected') tries.rejected++;
+    fruitless.set(piece, tries);
+  }
+  return finish(false);
+}
+
+/**
+ * Root edges of one piece of the zero set that lead to a known family, or to nothing (no root, no
+ * convergence, another signature, a collision), before the rest of the piece is given up: bounds the
+ * work on pieces that are one known family the coverage resolves poorly, or no family at all.
+ */
+const MAX_KNOWN_TRIES_PER_PIECE = 12;
+const MAX_REJECTED_TRIES_PER_PIECE = 4;
+
+/** The job's own discovery grids, when the run layer did not compute them once for all jobs. */
+function discoverForJob(job: FamilyJob, hooks: JobHooks): DiscoveryResult[] | null {
+  const requests = jobDiscoveryRequests(job);
+  const total = requests.length;
+  const results: DiscoveryResult[] = [];
+  for (const [n, request] of requests.entries()) {
+    const result = discoverCandidates(request, {
+      shouldStop: hooks.shouldStop,
+      onLevel: (done, all) => hooks.onDiscovery?.({ jobKey: job.key, gridsDone: n, grids: total, pointsDone: done, points: all }),
+    });
+    if (result.interrupted) return null;
+    results.push(result);
+  }
+  return results;
 }

@@ -6,6 +6,7 @@ import { findRootBrent } from '../events/find-root-brent.ts';
 import { yAxisCrossing } from '../events/y-axis-crossing.ts';
 import { propagate } from '../propagation/propagate.ts';
 import type { AxisSegment } from './family-job.ts';
+import { halfCrossingResidual } from './half-crossing-residual.ts';
 
 export interface SeedCandidate {
   x0: number;
@@ -69,13 +70,8 @@ function crossingVx(mu: number, x0: number, vy0: number, maxCrossings: number, o
 }
 
 function halfCrossingAt(mu: number, x0: number, vy0: number, k: number, o: ScanOptions): { vx: number; t: number; earlier: number[] } {
-  const run = propagate(mu, [x0, 0, 0, vy0], o.maxHalfTimeNd, {
-    rtol: o.rtol, atol: o.atol, events: [yAxisCrossing({ terminalCount: k })],
-    collisionRadiusNd: Math.min(o.primaryRadiusNd, o.secondaryRadiusNd) * 0.5,
-  });
-  if (run.events.length < k) return { vx: NaN, t: NaN, earlier: [] };
-  const last = run.events[k - 1];
-  return { vx: last.state[3], t: last.tNd, earlier: run.events.slice(0, k - 1).map((e) => e.state[3]) };
+  const r = halfCrossingResidual(mu, x0, vy0, k, { ...o, collisionRadiusNd: Math.min(o.primaryRadiusNd, o.secondaryRadiusNd) * 0.5 });
+  return { vx: r.vx, t: r.tNd, earlier: r.earlierVx };
 }
 
 export function scanAxisSegment(

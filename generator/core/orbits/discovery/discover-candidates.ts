@@ -1,0 +1,59 @@
+// Discovery for one x-axis segment and start direction: the residual grid over (x0, C) and the root
+// edges of its zero set. Every lap-signature job of a system with the same grid shares this result.
+import type { AxisSegment } from '../family-job.ts';
+import { segmentGrid } from '../scan-axis-segment.ts';
+import { computeResidualGrid, type GridProgress } from './residual-grid.ts';
+import type { ZeroCandidate } from './zero-candidate.ts';
+import { zeroSetCandidates } from './zero-set-candidates.ts';
+
+export interface DiscoveryRequest {
+  mu: number;
+  segment: AxisSegment;
+  direction: 1 | -1;
+  /** Start points along the segment (denser toward the bodies). */
+  gridPoints: number;
+  /** Jacobi levels of the grid, increasing. */
+  levels: number[];
+  maxHalfCrossings: number;
+  /** Loose: only signs, crossing times and lap counts are needed; Newton polishes later. */
+  rtol: number;
+  atol: number;
+  maxHalfTimeNd: number;
+  primaryRadiusNd: number;
+  secondaryRadiusNd: number;
+  xL1: number;
+  /** Largest distance from the nearer primary scanned on the far sides. */
+  reachNd: number;
+}
+
+export interface DiscoveryResult {
+  request: DiscoveryRequest;
+  /** Grid points propagated (reachable starts only count as work, but all are listed). */
+  gridPoints: number;
+  xs: number[];
+  candidates: ZeroCandidate[];
+  /** True when a stop request ended the grid early (no candidates then). */
+  interrupted: boolean;
+}
+
+/** Identifies the grid a request describes; requests with equal keys give equal results. */
+export function discoveryKey(request: DiscoveryRequest): string {
+  const { maxHalfCrossings: _ignored, ...rest } = request;
+  return JSON.stringify(rest);
+}
+
+export function collisionRadiusOf(request: Pick<DiscoveryRequest, 'primaryRadiusNd' | 'secondaryRadiusNd'>): number {
+  return 0.5 * Math.min(request.primaryRadiusNd, request.secondaryRadiusNd);
+}
+
+export function discoverCandidates(request: DiscoveryRequest, progress: GridProgress = {}): DiscoveryResult {
+  const xs = segmentGrid(request.mu, request.segment, request.gridPoints, request);
+  const levels = [...request.levels].sort((a, b) => a - b);
+  const grid = computeResidualGrid(request.mu, request.segment, request.direction, xs, levels, request.maxHalfCrossings, {
+    rtol: request.rtol, atol: request.atol, maxHalfTimeNd: request.maxHalfTimeNd,
+    collisionRadiusNd: collisionRadiusOf(request), xL1: request.xL1,
+  }, progress);
+  const gridPoints = xs.length * levels.length;
+  if (!grid) return { request, gridPoints, xs, candidates: [], interrupted: true };
+  return { request, gridPoints, xs, candidates: zeroSetCandidates(grid), interrupted: false };
+}

@@ -1,0 +1,91 @@
+// Which edges of the discovery grids a continued family passes through. A symmetric orbit is a root of
+// two grids at once: from x0 with the start direction, and from its other perpendicular crossing x_{T/2}
+// with the direction of ẏ there (same crossing count: the second half mirrors the first). A covered root
+// edge lies, to the grid's resolution, on a family already continued: discovery skips it.
+import type { AxisSegment } from '../family-job.ts';
+import type { FamilyMember } from '../family-member.ts';
+
+interface GridAxes {
+  xs: readonly number[];
+  levels: readonly number[];
+}
+
+function segmentOf(mu: number, x: number): AxisSegment {
+  return x < -mu ? 'far-primary' : x < 1 - mu ? 'between' : 'far-secondary';
+}
+
+/** Index of the cell [v[i], v[i+1]) holding value, or −1 outside the axis. */
+function cellIndex(axis: readonly number[], value: number): number {
+  if (!(value >= axis[0]! && value <= axis[axis.length - 1]!)) return -1;
+  let lo = 0, hi = axis.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (axis[mid]! <= value) lo = mid;
+    else hi = mid;
+  }
+  return Math.min(lo, Math.max(0, axis.length - 2));
+}
+
+export class FamilyCoverage {
+  private readonly covered = new Set<string>();
+  constructor(private readonly mu: number, private readonly grids: ReadonlyMap<string, GridAxes>) {}
+
+  static gridId(segment: AxisSegment, direction: 1 | -1): string {
+    return `${segment}${direction}`;
+  }
+
+  /** Marks the grid edges along the family's two curves in the (x0, C) grids. */
+  addFamily(members: readonly FamilyMember[], halfCrossings: number): void {
+    const curves = [
+      members.map((m) => ({ x: m.x0, vy: m.vy0, jacobi: m.analysis.jacobi })),
+      members.map((m) => ({ x: m.xHalf, vy: m.vyHalf, jacobi: m.analysis.jacobi })),
+    ];
+    for (const curve of curves) {
+      for (let n = 0; n + 1 < curve.length; n++) this.markSegment(curve[n]!, curve[n + 1]!, halfCrossings);
+    }
+  }
+
+  covers(c: { segment: AxisSegment; direction: 1 | -1; halfCrossings: number; along: 'x' | 'jacobi'; i: number; j: number }): boolean {
+    return this.covered.has(edgeKey(FamilyCoverage.gridId(c.segment, c.direction), c.halfCrossings, c.along, c.i, c.j));
+  }
+
+  /**
+   * Marks the grid edges the segment a–b crosses, and their neighbours along the same grid line (the
+   * family between two members is taken as straight; the neighbours absorb the error of that).
+   */
+  private markSegment(a: CurvePoint, b: CurvePoint, k: number): void {
+    const id = gridOf(this.mu, a);
+    if (id !== gridOf(this.mu, b)) return; // the curve leaves this grid between the two members
+    const axes = this.grids.get(id);
+    if (!axes) return;
+    const { xs, levels } = axes;
+    // Edges along x at each level the segment crosses.
+    levels.forEach((level, j) => {
+      if ((level - a.jacobi) * (level - b.jacobi) > 0 || a.jacobi === b.jacobi) return;
+      const i = cellIndex(xs, a.x + ((level - a.jacobi) / (b.jacobi - a.jacobi)) * (b.x - a.x));
+      if (i < 0) return;
+      for (let di = -1; di <= 1; di++) this.covered.add(edgeKey(id, k, 'x', i + di, j));
+    });
+    // Edges along C at each start point the segment crosses.
+    xs.forEach((x, i) => {
+      if ((x - a.x) * (x - b.x) > 0 || a.x === b.x) return;
+      const j = cellIndex(levels, a.jacobi + ((x - a.x) / (b.x - a.x)) * (b.jacobi - a.jacobi));
+      if (j < 0) return;
+      for (let dj = -1; dj <= 1; dj++) this.covered.add(edgeKey(id, k, 'jacobi', i, j + dj));
+    });
+  }
+}
+
+interface CurvePoint {
+  x: number;
+  vy: number;
+  jacobi: number;
+}
+
+function gridOf(mu: number, p: CurvePoint): string {
+  return FamilyCoverage.gridId(segmentOf(mu, p.x), p.vy >= 0 ? 1 : -1);
+}
+
+function edgeKey(id: string, k: number, along: 'x' | 'jacobi', i: number, j: number): string {
+  return `${id}:${k}:${along}:${i}:${j}`;
+}

@@ -1,0 +1,34 @@
+import type { AxisSegment } from '../family-job.ts';
+import type { LapCounts } from '../lap-signature.ts';
+
+/**
+ * A grid edge across which the perpendicular-crossing residual ẋ_k changes sign continuously: a point of
+ * the zero set of G_k(x0, C), i.e. (up to the grid's resolution) a symmetric periodic orbit.
+ */
+export interface ZeroCandidate {
+  segment: AxisSegment;
+  direction: 1 | -1;
+  halfCrossings: number;
+  /** The edge runs along x0 at a fixed level, or along C at a fixed x0. */
+  along: 'x' | 'jacobi';
+  x0A: number;
+  x0B: number;
+  jacobiA: number;
+  jacobiB: number;
+  vxA: number;
+  vxB: number;
+  /** Linear interpolation of the root on the edge. */
+  x0Guess: number;
+  jacobiGuess: number;
+  tHalfGuessNd: number;
+  xHalfGuess: number;
+  /** Lap counts of the orbit at either end of the edge (one entry when both ends agree). */
+  laps: LapCounts[];
+  /** L1 neck passages over a period (the fewer of the two ends). */
+  l1Passages: number;
+  /** Connected piece of the zero set (per segment, direction and crossing count) the edge belongs to. */
+  piece: number;
+  /** Grid indices of the edge's first end (x index, level index). */
+  i: number;
+  j: number;
+}
