@@ -6,12 +6,12 @@
 // keys already set in the output are kept, but a different scenario name is refused; a job done in
 // both with different settings (other tolerances, limits, seed rule: another config) is refused. Each
 // input is merged in its own transaction: a failing input leaves the inputs merged before it in place.
-import { resolve } from 'node:path';
 import type { Database } from 'better-sqlite3';
 import { firstSettingDifference, formatSettingDifference } from './job-settings.ts';
-import { openSqliteForRead, openSqliteForWrite } from './open-sqlite.ts';
+import { closeWritable, openSqliteForRead, openSqliteForWrite } from './open-sqlite.ts';
 import { createCatalogReader } from './query.ts';
 import { prepareReplaceFamily } from './replace-family.ts';
+import { isCatalogOrSideFile } from './same-file.ts';
 import type { SqlRecord } from './row-mapping.ts';
 import { firstSystemConstantDifference } from './system-constants.ts';
 import { runTable, systemTable } from './table-columns.ts';
@@ -40,7 +40,9 @@ export function mergeCatalogs(outPath: string, inPaths: readonly string[]): Merg
     throw new Error('mergeCatalogs: inPaths must list at least one input catalog');
   }
   for (const path of inPaths) {
-    if (resolve(path) === resolve(outPath)) throw new Error(`mergeCatalogs: input ${path} is the output catalog itself`);
+    if (isCatalogOrSideFile(path, outPath) || isCatalogOrSideFile(outPath, path)) {
+      throw new MergeRefusedError(`mergeCatalogs: input ${path} is the output catalog itself (${outPath}, once links are resolved)`);
+    }
   }
   // Open (and so check) every input before the output is touched.
   const inputs: Database[] = [];
@@ -58,7 +60,7 @@ export function mergeCatalogs(outPath: string, inPaths: readonly string[]): Merg
       inputs: inputs.map((db, index) => mergeInput(db, inPaths[index] as string)),
     };
   } finally {
-    out.close();
+    closeWritable(out);
     for (const db of inputs) db.close();
   }
 }

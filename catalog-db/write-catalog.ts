@@ -1,8 +1,10 @@
 // Write side of the catalog (CatalogWriter) over an open connection. Every method is one
 // transaction; statements are prepared once.
 import type { Database } from 'better-sqlite3';
+import { prepareAuditStore } from './audit-store.ts';
 import { jobSettingsJson } from './job-settings.ts';
 import { prepareMetaStore } from './meta.ts';
+import { closeWritable } from './open-sqlite.ts';
 import { prepareReplaceFamily } from './replace-family.ts';
 import { runTable, systemTable } from './table-columns.ts';
 import type { CatalogWriter, JobWithSettings } from './types.ts';
@@ -36,6 +38,7 @@ export function createCatalogWriter(db: Database): CatalogWriter {
   });
   const replaceFamily = prepareReplaceFamily(db);
   const meta = prepareMetaStore(db);
+  const audits = prepareAuditStore(db);
 
   const markJob = (job: JobWithSettings, runId: number, where: string) => {
     const settings = jobSettingsJson(job, where);
@@ -82,11 +85,14 @@ export function createCatalogWriter(db: Database): CatalogWriter {
     setScenario(scenario) {
       meta.setScenario(scenario);
     },
+    writeAudit(audit) {
+      return audits.writeAudit(audit);
+    },
     forgetResults({ systemIds, jobKeys }) {
       return forgetTransaction.immediate(systemIds, jobKeys);
     },
     close() {
-      db.close();
+      closeWritable(db);
     },
   };
 }

@@ -28,7 +28,7 @@ export function verifyCatalog(dbPath: string, options: { familyId?: string; onPr
     const systems = new Map(reader.systems().map((s) => [s.id, s]));
     const runs = new Map<number, RunRow>(reader.runs().map((r) => [r.id, r]));
     const families = options.familyId === undefined ? reader.families() : [reader.family(options.familyId)];
-    if (families[0] === undefined) throw new RangeError(`family "${options.familyId}" is not in ${dbPath}`);
+    if (options.familyId !== undefined && families[0] === undefined) throw new RangeError(`family "${options.familyId}" is not in ${dbPath}`);
     const total = families.reduce((sum, f) => sum + (f?.memberCount ?? 0), 0);
     const report: VerifyReport = { orbitsChecked: 0, failures: [], worstClosure: 0, worstDrift: 0, seconds: 0 };
     for (const family of families) {

@@ -1,13 +1,16 @@
 // Bad input anywhere: exactly one line naming the field or option, the value and what is allowed; exit
 // code 2; nothing already in a catalog lost or changed (checksum of every row before and after).
 // One small catalog is generated once and reused; each case runs its command in this process.
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, symlinkSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Command } from 'commander';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createExportStateCommand } from '../../generator/cli/commands/export-state.ts';
+import { createExportCommand } from '../../generator/cli/commands/export.ts';
 import { createGenerateCommand } from '../../generator/cli/commands/generate.ts';
 import { createMergeCommand } from '../../generator/cli/commands/merge.ts';
+import { createVerifyCommand } from '../../generator/cli/commands/verify.ts';
 import { catalogChecksum } from './catalog-checksum.ts';
 import { copyCatalog, generateTiny, tinyConfigWith, writeText } from './hostile-inputs.fixture.ts';
 import { runCommand } from './run-command.ts';
@@ -17,6 +20,10 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 const base = join(dir, 'base.sqlite');
 const other = join(dir, 'other-settings.sqlite');
 const config = (name: string, text: string) => writeText(dir, name, text);
+const link = join(dir, 'link-to-base.sqlite');
+const folder = join(dir, 'a-folder');
+const longName = join(dir, `${'n'.repeat(300)}.sqlite`);
+const quoted = (path: string) => path.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
 interface HostileCase {
   item: number;
@@ -31,6 +38,10 @@ interface HostileCase {
 
 const generate = createGenerateCommand;
 const merge = createMergeCommand;
+const exportCatalog = createExportCommand;
+const exportState = createExportStateCommand;
+const verify = createVerifyCommand;
+const stateArgs = ['--orbit', 'earth-moon/L1-Lyapunov/a/0000', '--epoch', '2030-01-01T00:00:00Z'];
 
 const cases: HostileCase[] = [
   {
@@ -59,6 +70,52 @@ const cases: HostileCase[] = [
     firstLine: /^mergeCatalogs: job earth-moon:L1-lyapunov differs between \S*merge-out\.sqlite and \S*other-settings\.sqlite: limits\.maxMembers \(6 → 7\) \(computed with other settings; merge only catalogs of the same config\)$/,
     catalogs: () => [join(dir, 'merge-out.sqlite'), other],
   },
+  {
+    item: 3, what: 'export --out the catalog itself', create: exportCatalog,
+    args: () => ['--db', base, '--out', base],
+    firstLine: new RegExp(`^--out: "${quoted(base)}" is the file given as --db \\("${quoted(base)}"\\); writing it would destroy it \\(give another file\\)$`),
+  },
+  {
+    item: 3, what: 'export --out a symlink to the catalog', create: exportCatalog,
+    args: () => ['--db', base, '--format', 'csv', '--out', link],
+    firstLine: /^--out: "\S*link-to-base\.sqlite" is the file given as --db /,
+  },
+  {
+    item: 3, what: "export --out the catalog's WAL file", create: exportCatalog,
+    args: () => ['--db', base, '--out', `${base}-wal`],
+    firstLine: /^--out: "\S*base\.sqlite-wal" is the file given as --db /,
+  },
+  {
+    item: 3, what: 'export-state --out the catalog itself', create: exportState,
+    args: () => ['--db', base, ...stateArgs, '--out', base],
+    firstLine: /^--out: "\S*base\.sqlite" is the file given as --db /,
+  },
+  {
+    item: 3, what: 'merge into a symlink to one of its inputs', create: merge,
+    args: () => [link, base],
+    firstLine: /^OUT: "\S*link-to-base\.sqlite" is the file given as IN \("\S*base\.sqlite"\); writing it would destroy it/,
+  },
+  { item: 11, what: 'verify --db a directory', create: verify, args: () => ['--db', folder],
+    firstLine: /^--db: "\S*a-folder" is a directory \(a catalog file written by generate\)$/ },
+  { item: 11, what: 'verify --db an empty path', create: verify, args: () => ['--db', ''],
+    firstLine: /^--db: "" is not allowed \(a catalog file written by generate; an empty path names no file\)$/ },
+  { item: 11, what: 'export --db a 300-character name', create: exportCatalog, args: () => ['--db', longName],
+    firstLine: /^--db: "\S+" is not allowed \(a catalog file written by generate; a file or directory name of at most 255 bytes, "\S+" has 307\)$/ },
+  { item: 11, what: 'generate --db a directory', create: generate, args: () => ['--db', folder],
+    firstLine: /^--db: "\S*a-folder" is a directory \(a catalog file to write, created if missing\)$/ },
+  { item: 11, what: 'generate --db an empty path', create: generate, args: () => ['--db', ''],
+    firstLine: /^--db: "" is not allowed \(a catalog file to write, created if missing; an empty path names no file\)$/ },
+  { item: 11, what: 'generate --db a 300-character name', create: generate, args: () => ['--db', longName],
+    firstLine: /^--db: "\S+" is not allowed \(a catalog file to write, created if missing; a file or directory name of at most 255 bytes/ },
+  { item: 11, what: 'generate --db in a missing directory', create: generate, args: () => ['--db', join(dir, 'nowhere', 'x.sqlite')],
+    firstLine: /^--db: "\S*nowhere\/x\.sqlite" cannot be created: directory \S*nowhere does not exist \(a catalog file to write, created if missing\)$/ },
+  { item: 11, what: 'export --out a directory', create: exportCatalog, args: () => ['--db', base, '--out', folder],
+    firstLine: /^--out: "\S*a-folder" is a directory \(a file to write\)$/ },
+  { item: 11, what: "merge's output a directory", create: merge, args: () => [folder, base],
+    firstLine: /^OUT: "\S*a-folder" is a directory \(a catalog file to write, created if missing\)$/ },
+  { item: 11, what: "merge's input a directory", create: merge, args: () => [join(dir, 'merge-out.sqlite'), folder],
+    firstLine: /^IN: "\S*a-folder" is a directory \(a catalog file written by generate\)$/,
+    catalogs: () => [join(dir, 'merge-out.sqlite')] },
 ];
 
 describe('hostile inputs: one line, exit 2, catalogs unchanged', () => {
@@ -66,6 +123,8 @@ describe('hostile inputs: one line, exit 2, catalogs unchanged', () => {
     await generateTiny(base);
     await generateTiny(other, tinyConfigWith('maxMembers: 6', 'maxMembers: 7'));
     copyCatalog(base, join(dir, 'merge-out.sqlite'));
+    symlinkSync(base, link);
+    mkdirSync(folder);
   });
 
   it.each(cases.map((c) => [`item ${c.item}: ${c.what}`, c] as const))('%s', async (_name, c) => {

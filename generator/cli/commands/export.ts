@@ -1,11 +1,12 @@
 // `cycler-atlas export --db FILE --format json|csv [--family ID] [--out FILE]`: the whole catalog (or
 // one family) as JSON or CSV, written to a file or to standard output.
-import { existsSync, writeFileSync } from 'node:fs';
+import { writeFileSync } from 'node:fs';
 import { Command } from 'commander';
 import { exportCatalogCsv, exportCatalogJson } from '../../../catalog-db/export-catalog.ts';
 import { openCatalogForRead } from '../../../catalog-db/open-catalog.ts';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { UsageError } from '../../run/command-line-values.ts';
+import { assertOutputIsNotInput, assertReadableCatalogPath } from '../../run/path-options.ts';
 
 const DEFAULT_DB_PATH = 'catalog-db/demo.sqlite';
 const FORMATS = ['json', 'csv'] as const;
@@ -22,7 +23,8 @@ export function createExportCommand(): Command {
         if (!(FORMATS as readonly string[]).includes(flags.format)) {
           throw new UsageError(`--format: "${flags.format}" is not allowed (allowed: ${FORMATS.join(', ')})`);
         }
-        if (!existsSync(flags.db)) throw new UsageError(`--db: "${flags.db}" does not exist (a catalog file written by generate)`);
+        assertReadableCatalogPath('--db', flags.db);
+        if (flags.out !== undefined) assertOutputIsNotInput('--out', flags.out, [['--db', flags.db]]);
         const reader = openCatalogForRead(flags.db);
         let text: string;
         try {

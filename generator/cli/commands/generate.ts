@@ -10,6 +10,7 @@ import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { parseIntegerOption, parseNumberListOption, UsageError } from '../../run/command-line-values.ts';
 import { generateFromConfig, type GenerateSummary } from '../../run/generate-catalog.ts';
 import { INTERRUPTED_EXIT_CODE } from '../../run/interrupt-handler.ts';
+import { assertWritableCatalogPath } from '../../run/path-options.ts';
 import { RECOMPUTE_OPTION } from '../../run/settings-changes.ts';
 import { shardFromOptions } from '../../run/shard-from-environment.ts';
 
@@ -61,6 +62,7 @@ export function createGenerateCommand(): Command {
 }
 
 async function generate(configArg: string | undefined, flags: GenerateFlags): Promise<GenerateSummary> {
+  assertWritableCatalogPath('--db', flags.db);
   const workers = flags.workers === undefined ? undefined : parseIntegerOption('--workers', flags.workers, 1, 256);
   const shard = shardFromOptions(flags.shard, flags.shardCount, process.env);
   if (!(PROGRESS_MODES as readonly string[]).includes(flags.progress)) {

@@ -1,10 +1,10 @@
 // `cycler-atlas merge OUT IN...`: merges shard catalogs (from `generate --shard k/n`) into OUT
 // (created if missing). The rules for families present twice are catalog-db/merge-catalogs.ts's.
-import { existsSync } from 'node:fs';
 import { Command } from 'commander';
 import { MergeRefusedError, mergeCatalogs } from '../../../catalog-db/merge-catalogs.ts';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { UsageError } from '../../run/command-line-values.ts';
+import { assertOutputIsNotInput, assertReadableCatalogPath, assertWritableCatalogPath } from '../../run/path-options.ts';
 
 export function createMergeCommand(): Command {
   const command = new Command('merge')
@@ -13,8 +13,9 @@ export function createMergeCommand(): Command {
     .argument('<in...>', 'catalog files to merge into it')
     .action((out: string, inputs: string[]) => {
       try {
-        const missing = inputs.find((path) => !existsSync(path));
-        if (missing !== undefined) throw new UsageError(`IN: "${missing}" does not exist (a catalog file written by generate)`);
+        for (const input of inputs) assertReadableCatalogPath('IN', input);
+        assertWritableCatalogPath('OUT', out);
+        assertOutputIsNotInput('OUT', out, inputs.map((input) => ['IN', input] as const));
         const report = mergeCatalogs(out, inputs);
         for (const input of report.inputs) {
           console.log(

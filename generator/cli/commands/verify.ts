@@ -2,10 +2,10 @@
 // reports those whose closure error or Jacobi drift exceeds the limits of generator/run/verify-limits.ts
 // (at the usual tolerance 1e-12: closure 1e-8 times the orbit's largest eigenvalue modulus λ, drift
 // 1e-9). Exit 1 if any does, 2 on bad arguments.
-import { existsSync } from 'node:fs';
 import { Command } from 'commander';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { UsageError } from '../../run/command-line-values.ts';
+import { assertReadableCatalogPath } from '../../run/path-options.ts';
 import { verifyCatalog } from '../../run/verify-catalog.ts';
 
 const DEFAULT_DB_PATH = 'catalog-db/demo.sqlite';
@@ -19,7 +19,7 @@ export function createVerifyCommand(): Command {
     .option('--family <id>', 'check only this family')
     .action((flags: { db: string; family?: string }) => {
       try {
-        if (!existsSync(flags.db)) throw new UsageError(`--db: "${flags.db}" does not exist (a catalog file written by generate)`);
+        assertReadableCatalogPath('--db', flags.db);
         const report = verifyCatalog(flags.db, { familyId: flags.family });
         console.log(
           `verified ${report.orbitsChecked} orbits in ${report.seconds.toFixed(1)} s: worst closure error ${formatNumber(report.worstClosure)}, ` +
