@@ -12,6 +12,7 @@ import { findSystemPreset, massRatioOf } from '../../core/cr3bp/system-presets.t
 import { sampleTrajectory } from '../../core/propagation/sample-trajectory.ts';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { UsageError } from '../../run/command-line-values.ts';
+import { assertOutputIsNotInput } from '../../run/path-options.ts';
 import { parseNumberInRange } from '../parse-number.ts';
 import { describeExport } from '../state-export/export-description.ts';
 import { formatStateCsv } from '../state-export/format-state-csv.ts';
@@ -53,6 +54,7 @@ export function createExportStateCommand(): Command {
     .option('--out <file>', 'output file (default: standard output)')
     .action((flags: ExportStateFlags) => {
       try {
+        if (flags.out !== undefined) assertOutputIsNotInput('--out', flags.out, [['--db', flags.db]]);
         const text = runExportState(flags);
         if (flags.out === undefined) process.stdout.write(text);
         else {
