@@ -189,6 +189,8 @@ export interface CatalogWriter {
   markJobDone(job: JobWithSettings, runId: number): void;
   /** Stores the scenario's name, description and team (replaces any earlier ones). */
   setScenario(scenario: ScenarioMeta): void;
+  /** Stores a finished completeness audit (one transaction); returns its id. */
+  writeAudit(audit: Omit<AuditRow, 'id'>): number;
   /** One transaction: deletes every family of the given systems and of the given jobs (with everything
    *  under them) and the given jobs' done marks, so that a run recomputes them. Returns what went. */
   forgetResults(what: { systemIds: readonly string[]; jobKeys: readonly string[] }): { families: number; jobs: number };

@@ -2,10 +2,8 @@
 // the audit levels, runs the audit of each job (core/orbits/audit-job.ts) with progress on stderr and a
 // clean stop on Ctrl-C, and stores a finished audit in the catalog's audits table. An interrupted audit
 // is not stored: the catalog stays as it was.
-import { prepareAuditStore } from '../../catalog-db/audit-store.ts';
 import type { AuditMiss, AuditRow } from '../../catalog-db/audit-types.ts';
-import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
-import { openSqliteForWrite } from '../../catalog-db/open-sqlite.ts';
+import { openCatalogForRead, openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
 import { storedOrbitFootprint, type StoredFootprint } from '../core/orbits/audit-footprint.ts';
 import { auditJob, auditScanCount } from '../core/orbits/audit-job.ts';
 import type { AuditOrbit, LapSignatureJob } from '../core/orbits/audit-scan.ts';
@@ -98,10 +96,10 @@ export function auditCatalog(options: AuditOptions): AuditReport {
     levelsPerSystem: options.levelsPerSystem, gridFactor, levels, jobsAudited: work.length, orbitsChecked, misses,
   };
   if (interrupted) return { ...audit, interrupted };
-  const db = openSqliteForWrite(options.dbPath);
+  const writer = openCatalogForWrite(options.dbPath);
   try {
-    return { ...audit, interrupted, auditId: prepareAuditStore(db).writeAudit(audit) };
+    return { ...audit, interrupted, auditId: writer.writeAudit(audit) };
   } finally {
-    db.close();
+    writer.close();
   }
 }

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { prepareAuditStore } from '../../catalog-db/audit-store.ts';
 import type { AuditRow } from '../../catalog-db/audit-types.ts';
 import { auditSummary, readLatestAudit } from '../../catalog-db/latest-audit.ts';
-import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
+import { openCatalogForRead, openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
 import { openSqliteForRead, openSqliteForWrite } from '../../catalog-db/open-sqlite.ts';
 import { useTempCatalogDir } from './temp-catalog-path.ts';
 
@@ -27,11 +27,10 @@ const miss: AuditRow['misses'][number] = {
 describe('audits table', () => {
   it('reads audits back as written, newest first', () => {
     const path = catalogPath('audits.sqlite');
-    const db = openSqliteForWrite(path);
-    const store = prepareAuditStore(db);
-    const first = store.writeAudit(audit('2026-01-01T00:00:00.000Z'));
-    const second = store.writeAudit(audit('2026-01-02T00:00:00.000Z', [miss]));
-    db.close();
+    const writer = openCatalogForWrite(path);
+    const first = writer.writeAudit(audit('2026-01-01T00:00:00.000Z'));
+    const second = writer.writeAudit(audit('2026-01-02T00:00:00.000Z', [miss]));
+    writer.close();
     const read = prepareAuditStore(openSqliteForRead(path));
     expect(read.audits().map((a) => a.id)).toEqual([second, first]);
     expect(read.latestAudit()).toEqual({ id: second, ...audit('2026-01-02T00:00:00.000Z', [miss]) });
