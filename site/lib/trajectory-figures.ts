@@ -1,7 +1,7 @@
 // Build-time pictures of one period of an orbit: plain SVG geometry (paths, circles, ticks) for the
 // rotating frame and for inertial axes centred on each body. Bodies are drawn to scale; a tick marks
 // each elapsed day. Pure: numbers in, geometry out (the page component turns it into SVG markup).
-import { bodyX, rotatingToBodyInertial, type FrameCentre } from './body-inertial-frame.ts';
+import { bodyX, rotatingToBodyInertial, type FrameCentre } from '../../generator/core/state-export/body-inertial-frame.ts';
 import { simplifyPolyline } from './simplify-polyline.ts';
 import { polylinePath, roundTenth } from './svg-path.ts';
 

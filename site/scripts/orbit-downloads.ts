@@ -1,37 +1,48 @@
-// Browser side of an orbit page's downloads: reads the form, propagates with the generator's own
-// propagator and saves CSV, JSON or CCSDS OEM. The epoch-dated Earth-centred frame loads its two modules
-// (the frame map and the bundled ephemeris) only when chosen. Errors show next to the buttons, one line each.
+// Browser side of an orbit page's downloads: a thin shell that reads the form, asks the core's state
+// export (generator/core/state-export/, the module `export-state` uses) for the series and saves it as
+// CSV, JSON or CCSDS OEM. The Moon's ephemeris loads only when the EME2000 frame is chosen. Errors show
+// next to the buttons, one line each, naming the field.
+import { parseEpochMicros } from '../../generator/core/state-export/epoch-text.ts';
+import type { ExportOrbit } from '../../generator/core/state-export/export-orbit.ts';
+import { formatStateCsv } from '../../generator/core/state-export/format-csv.ts';
+import { formatStateJson } from '../../generator/core/state-export/format-json.ts';
+import { formatStateOem } from '../../generator/core/state-export/format-oem.ts';
+import type { MoonAt } from '../../generator/core/state-export/moon-geometry.ts';
+import type { StateFrame, StateUnits } from '../../generator/core/state-export/state-frames.ts';
+import { stateSeries } from '../../generator/core/state-export/state-series.ts';
+import { STEP_UNITS, stepSeconds, type StepUnit } from '../../generator/core/state-export/step-units.ts';
 import { saveTextFile } from './save-text-file.ts';
-import { parseEpochMicros } from './state-vectors/epoch-text.ts';
-import { seriesToCsv } from './state-vectors/format-csv.ts';
-import { seriesToJson } from './state-vectors/format-json.ts';
-import { seriesToOem } from './state-vectors/format-oem.ts';
-import type { OrbitDownloadData } from './state-vectors/orbit-download-data.ts';
-import { stateSeries, type SeriesFrame, type SeriesUnits, type StateSeries } from './state-vectors/state-series.ts';
 
-const STEP_UNIT_S: Record<string, number> = { s: 1, min: 60, h: 3600, d: 86400 };
-const FRAME_TAG: Record<SeriesFrame, string> = {
-  rotating: 'rot', primary: 'inertial-primary', secondary: 'inertial-secondary', eme2000: 'eme2000',
-};
+/** What the page embeds for this script (JSON). */
+export interface OrbitDownloadData {
+  orbit: ExportOrbit;
+  fileStem: string;
+}
 
 type Format = 'csv' | 'json' | 'oem';
+const MIME: Record<Format, string> = { csv: 'text/csv', json: 'application/json', oem: 'text/plain' };
 
-function readNumber(form: HTMLFormElement, name: string, label: string): number {
-  const input = form.elements.namedItem(name) as HTMLInputElement;
-  const value = Number(input.value);
-  if (input.value.trim() === '' || !Number.isFinite(value)) throw new RangeError(`${label} must be a number, got ${JSON.stringify(input.value)}`);
+function readNumber(text: string, field: string, allowed: string, ok: (value: number) => boolean): number {
+  const value = Number(text);
+  if (text.trim() === '' || !Number.isFinite(value) || !ok(value)) throw new RangeError(`${field}: "${text}" is not allowed (${allowed})`);
   return value;
 }
 
-async function datedSeries(orbit: OrbitDownloadData, periods: number, stepNd: number, startMicros: number): Promise<StateSeries> {
-  const [{ epochDatedSeries }, { geocentricMoonAt }] = await Promise.all([
-    import('./state-vectors/epoch-dated-series.ts'),
-    import('./state-vectors/moon-ephemeris.ts'),
-  ]);
-  return epochDatedSeries(orbit, { periods, stepNd, startMicros }, geocentricMoonAt);
+function withField<T>(field: string, make: () => T): T {
+  try {
+    return make();
+  } catch (error) {
+    if (error instanceof RangeError) throw new RangeError(`${field}: ${error.message}`);
+    throw error;
+  }
 }
 
-export function startOrbitDownloads(form: HTMLFormElement, orbit: OrbitDownloadData): void {
+async function moonForFrame(frame: StateFrame): Promise<MoonAt | undefined> {
+  if (frame !== 'eme2000') return undefined;
+  return (await import('../../generator/ephemeris/geocentric-moon.ts')).geocentricMoonAt;
+}
+
+export function startOrbitDownloads(form: HTMLFormElement, data: OrbitDownloadData): void {
   const note = form.querySelector<HTMLElement>('[data-role="download-note"]')!;
   const field = (name: string) => (form.elements.namedItem(name) as HTMLInputElement | HTMLSelectElement).value;
   let busy = false;
@@ -42,30 +53,22 @@ export function startOrbitDownloads(form: HTMLFormElement, orbit: OrbitDownloadD
     form.dataset.busy = 'true';
     note.classList.remove('error');
     try {
-      const periods = readNumber(form, 'periods', 'span (periods)');
-      const step = readNumber(form, 'step', 'step');
-      const stepUnit = field('stepUnit');
-      const stepNd = stepUnit === 'tu' ? step : (step * (STEP_UNIT_S[stepUnit] ?? NaN)) / orbit.timeUnitS;
-      const frame = field('frame') as SeriesFrame;
-      if (frame === 'eme2000' && !orbit.earthMoon) throw new RangeError('frame: the Earth-centred EME2000 frame is offered for Earth–Moon orbits only');
-      const epochText = field('epoch');
-      // Checked only where an epoch is used: the dated frame and the OEM of the model frames.
-      const startMicros = frame === 'eme2000' || format === 'oem' ? parseEpochMicros(epochText) : NaN;
-      // OEM carries km and km/s by the standard; the dated frame is in km and km/s only.
-      const units = (format === 'oem' || frame === 'eme2000' ? 'km' : field('units')) as SeriesUnits;
+      const periods = readNumber(field('periods'), 'span (periods)', 'a number in (0, 1000]', (v) => v > 0 && v <= 1000);
+      const step = readNumber(field('step'), 'step', 'a positive number', (v) => v > 0);
+      const stepUnit = field('stepUnit') as StepUnit;
+      if (!STEP_UNITS.includes(stepUnit)) throw new RangeError(`step unit: "${stepUnit}" is not allowed (allowed: ${STEP_UNITS.join(', ')})`);
+      const frame = field('frame') as StateFrame;
+      const startEpochMicros = withField('start epoch', () => parseEpochMicros(field('epoch')));
+      // OEM and the EME2000 frame are in km and km/s by definition.
+      const units = (format === 'oem' || frame === 'eme2000' ? 'km' : field('units')) as StateUnits;
       const t0 = performance.now();
-      const series = frame === 'eme2000'
-        ? await datedSeries(orbit, periods, stepNd, startMicros)
-        : stateSeries(orbit, { periods, stepNd, frame, units });
-      const name = `${orbit.fileStem}-${FRAME_TAG[frame]}-${units}`;
-      if (format === 'csv') saveTextFile(`${name}.csv`, 'text/csv', seriesToCsv(series));
-      else if (format === 'json') saveTextFile(`${name}.json`, 'application/json', seriesToJson(orbit, series));
-      else {
-        const creationDate = new Date().toISOString().replace('Z', '');
-        saveTextFile(`${name}.oem`, 'text/plain', seriesToOem(orbit, series, { startEpoch: epochText, creationDate }));
-      }
-      note.textContent = `${series.count.toLocaleString('en-US')} states, step ${series.stepNd.toPrecision(6)} TU (${(series.stepNd * orbit.timeUnitS).toPrecision(6)} s), computed in ${(performance.now() - t0).toFixed(0)} ms.` +
-        (frame === 'eme2000' ? ' Earth-centred EME2000 states in km, km/s (dated frame; see the approximation above).' : '');
+      const moonAt = await moonForFrame(frame);
+      const series = withField('step', () => stateSeries(
+        data.orbit, { frame, units, startEpochMicros, span: { periods, stepS: stepSeconds(step, stepUnit, data.orbit.timeUnitS) } }, moonAt,
+      ));
+      const text = format === 'csv' ? formatStateCsv(series) : format === 'json' ? formatStateJson(series) : formatStateOem(series, Date.now() * 1000);
+      saveTextFile(`${data.fileStem}-${frame}-${units}.${format}`, MIME[format], text);
+      note.textContent = `${series.count.toLocaleString('en-US')} states, ${frame}, ${units === 'km' ? 'km and km/s' : 'LU and LU/TU'}, computed in ${(performance.now() - t0).toFixed(0)} ms.`;
     } catch (error) {
       note.textContent = (error as Error).message;
       note.classList.add('error');

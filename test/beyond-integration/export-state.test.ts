@@ -54,7 +54,7 @@ beforeAll(() => {
   writer.close();
 });
 
-const flags = (over: Partial<ExportStateFlags>): ExportStateFlags => ({ orbit: lyapunovId, epoch: EPOCHS[0], frame: 'icrf-earth', db, format: 'json', ...over });
+const flags = (over: Partial<ExportStateFlags>): ExportStateFlags => ({ orbit: lyapunovId, epoch: EPOCHS[0], frame: 'icrf-earth', units: 'km', db, format: 'json', ...over });
 const json = (over: Partial<ExportStateFlags>) => JSON.parse(runExportState(flags(over)));
 const utcMs = (epochUtc: string) => Date.parse(`${epochUtc.slice(0, 23)}Z`) + Number(epochUtc.slice(23)) / 1000;
 
@@ -62,7 +62,7 @@ describe('export-state in icrf-earth', () => {
   it('maps the Moon point (1 − μ, 0, 0) at rest onto astronomy-engine\'s geocentric Moon', () => {
     for (const epoch of EPOCHS) {
       const out = json({ orbit: MOON_POINT_ID, epoch });
-      expect(out).toMatchObject({ refFrame: 'EME2000', centerName: 'EARTH', timeSystem: 'UTC', frame: 'icrf-earth' });
+      expect(out).toMatchObject({ refFrame: 'EME2000', centerName: 'EARTH', timeSystem: 'UTC', frame: 'eme2000' });
       expect(out.states).toHaveLength(1);
       const [state] = out.states;
       expect(state.epochUtc).toBe(epoch.replace('Z', '.000000'));
@@ -75,7 +75,9 @@ describe('export-state in icrf-earth', () => {
       const miss = Math.hypot(...state.positionKm.map((v: number, k: number) => v - position[k]!));
       expect(miss).toBeLessThan(1e-9 * r); // round-off of ~4e5 km
       const speedMiss = Math.hypot(...state.velocityKmS.map((v: number, k: number) => v - velocity[k]!));
-      expect(speedMiss).toBeLessThan(1e-12); // km/s
+      // km/s; GeoMoonState's velocity is a difference of positions 1.7 s apart, so the last bits of sine and
+      // cosine (the export runs under portable ones, the reference under the engine's) show at ~1e-10 km/s
+      expect(speedMiss).toBeLessThan(1e-9);
     }
   });
 
@@ -83,7 +85,7 @@ describe('export-state in icrf-earth', () => {
     const out = json({ periods: '0.3', step: '10min' });
     const s = out.states as Array<{ epochUtc: string; tNd: number; positionKm: number[]; velocityKmS: number[] }>;
     expect(s.length).toBeGreaterThan(100);
-    expect((utcMs(s[1]!.epochUtc) - utcMs(s[0]!.epochUtc)) / 1000).toBeCloseTo(600, -1); // 10 min at the start rate
+    for (let k = 1; k < s.length; k++) expect(utcMs(s[k]!.epochUtc) - utcMs(s[k - 1]!.epochUtc)).toBe(600_000); // on the 10 min step
     let worst = 0;
     let worstMeanTime = 0;
     for (let k = 1; k + 1 < s.length; k++) {
@@ -99,12 +101,12 @@ describe('export-state in icrf-earth', () => {
 
   it('states the approximation in every format', () => {
     const out = json({});
-    expect(out.comments.join(' ')).toMatch(/APPROXIMATION: this is a CR3BP solution/);
+    expect(out.comments.join(' ')).toMatch(/APPROXIMATION: a CR3BP solution placed in the real sky/);
     expect(out.comments.join(' ')).toMatch(/instantaneous Earth-Moon frame/);
     const csv = runExportState(flags({ format: 'csv' }));
-    expect(csv).toMatch(/^# .*\r\n# Orbit .*\r\n# APPROXIMATION/);
+    expect(csv).toMatch(/^# .*\r\n# Orbit .*\r\n# Frame: .*\r\n# APPROXIMATION/);
     const oem = runExportState(flags({ format: 'oem' }));
-    expect(oem).toMatch(/\nCOMMENT APPROXIMATION: this is a CR3BP solution/);
+    expect(oem).toMatch(/\nCOMMENT APPROXIMATION: a CR3BP solution/);
   });
 });
 
@@ -185,7 +187,9 @@ describe('export-state bad input', () => {
     [{ epoch: '2030-02-30T00:00:00Z' }, '--epoch: "2030-02-30T00:00:00Z" is not a calendar date and time'],
     [{ epoch: '2030-01-01T00:00:00+01:00' }, 'only UTC (Z) is accepted'],
     [{ epoch: '2200-01-01T00:00:00Z' }, '--epoch: "2200-01-01T00:00:00Z" is outside the allowed years 1900 to 2100'],
-    [{ frame: 'gcrf' }, '--frame: "gcrf" is not allowed (allowed: icrf-earth, rotating)'],
+    [{ frame: 'gcrf' }, '--frame: "gcrf" is not allowed (allowed: rotating, inertial-primary, inertial-secondary, eme2000, icrf-earth)'],
+    [{ units: 'lu' }, '--units: "lu" is not allowed (allowed: km, nd)'],
+    [{ units: 'nd', frame: 'rotating', format: 'oem' }, '--units: "nd" is not allowed with --format oem (allowed: km)'],
     [{ format: 'xml' }, '--format: "xml" is not allowed (allowed: csv, json, oem)'],
     [{ periods: '0' }, '--periods: "0" is not allowed (a number in (0, 1000])'],
     [{ periods: '1', step: 'often' }, '--step: "often" is not allowed'],

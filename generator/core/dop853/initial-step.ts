@@ -24,6 +24,6 @@ export function initialStepSize(
   }
   secondDerivative = Math.sqrt(secondDerivative) / Math.abs(h);
   const bound = Math.max(Math.abs(secondDerivative), Math.sqrt(normF));
-  const h1 = bound <= 1e-15 ? Math.max(1e-6, Math.abs(h) * 1e-3) : (0.01 / bound) ** (1 / 8);
+  const h1 = bound <= 1e-15 ? Math.max(1e-6, Math.abs(h) * 1e-3) : Math.pow(0.01 / bound, 1 / 8); // Math.pow: see integrate.ts
   return Math.min(100 * Math.abs(h), h1, maxStep) * direction;
 }

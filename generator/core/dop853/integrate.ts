@@ -96,7 +96,9 @@ export function integrateDop853(
       rejections++;
       continue;
     }
-    const fac11 = err ** 0.125;
+    // Math.pow, not **: the same number, but a state export can swap in a portable pow so Node and a browser
+    // take the same steps (core/state-export/portable-math.ts).
+    const fac11 = Math.pow(err, 0.125);
     const fac = Math.max(FAC_MAX_INV, Math.min(FAC_MIN_INV, fac11 / SAFETY));
     let hNew = h / fac;
     if (err <= 1) {
