@@ -6,7 +6,6 @@
 // - membership holds at either perpendicular crossing: an orbit re-corrected from its other crossing
 //   (mirror theorem) is on the family, and so is one between members of a thinned family (refinement);
 // - stopped (Ctrl-C) after its first scan, it says so and stores nothing (common practice).
-import { spawn } from 'node:child_process';
 import { copyFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import Database from 'better-sqlite3';
@@ -25,24 +24,13 @@ import { auditCatalog } from '../../generator/run/audit-catalog.ts';
 import { lapSignatureJobsOf } from '../../generator/run/audit-jobs-of-catalog.ts';
 import { generateCatalog } from '../../generator/run/generate-catalog.ts';
 import { useTempCatalogDir } from '../catalog-db/temp-catalog-path.ts';
+import { runCli } from '../cli/run-cli.ts';
 
-const repoRoot = fileURLToPath(new URL('../../', import.meta.url));
 const configPath = fileURLToPath(new URL('./fixtures/audit-catalog.yaml', import.meta.url));
 const tempPath = useTempCatalogDir();
 const completePath = tempPath('complete.sqlite');
 const E1M1_FAMILY = 'earth-moon/E1M1/a';
 const LEVELS = '3';
-
-function cli(...args: string[]): Promise<{ code: number | null; stdout: string; stderr: string }> {
-  return new Promise((resolve) => {
-    const child = spawn(process.execPath, ['bin/cycler-atlas.mjs', ...args], { cwd: repoRoot });
-    let stdout = '';
-    let stderr = '';
-    child.stdout.on('data', (chunk: Buffer) => { stdout += chunk.toString(); });
-    child.stderr.on('data', (chunk: Buffer) => { stderr += chunk.toString(); });
-    child.on('close', (code) => resolve({ code, stdout, stderr }));
-  });
-}
 
 function storedAudits(path: string): AuditRow[] {
   const db = openSqliteForRead(path);
@@ -72,7 +60,7 @@ describe('cycler-atlas audit', () => {
   });
 
   it('passes on the complete catalog (exit 0) and stores the audit with its seed and levels', async () => {
-    const run = await cli('audit', '--db', completePath, '--levels', LEVELS, '--seed', '11');
+    const run = await runCli(['audit', '--db', completePath, '--levels', LEVELS, '--seed', '11']);
     expect(run.stdout).toContain('seed 11 (repeat with --seed 11)');
     expect(run.code, run.stdout + run.stderr).toBe(0);
     // Progress on stderr says what, how far and the rate (common practice).
@@ -91,7 +79,7 @@ describe('cycler-atlas audit', () => {
     db.pragma('foreign_keys = ON');
     db.prepare('DELETE FROM families WHERE id = ?').run(E1M1_FAMILY);
     db.close();
-    const run = await cli('audit', '--db', copyPath, '--levels', LEVELS, '--seed', '11');
+    const run = await runCli(['audit', '--db', copyPath, '--levels', LEVELS, '--seed', '11']);
     expect(run.code, run.stdout + run.stderr).toBe(1);
     const [audit] = storedAudits(copyPath);
     // Same seed, same levels as on the complete catalog (the draw is seeded).
