@@ -30,3 +30,10 @@ export function verifyLimitsFor(run: { rtol: number; atol: number }, largestEige
 export function largestEigenvalueModulus(eigenvalues: ReadonlyArray<readonly [number, number]>): number {
   return eigenvalues.reduce((largest, [re, im]) => Math.max(largest, Math.hypot(re, im)), 1);
 }
+
+/** How closely a stored derived value (stability indices, largest |λ|, period in days) must match the
+ *  re-integration's, relative to max(1, |value|). The indices come from a monodromy whose entries carry
+ *  integration error growing with λ; on an Earth–Moon E2M1 catalog (|ν| up to ~1e6) the worst stored
+ *  index was 3.6e-5 off its re-integration at 1e-14, so 1e-3 leaves room while a corrupted value
+ *  (a sign, a digit, a 1e300) still fails. */
+export const STORED_VALUE_RELATIVE_LIMIT = 1e-3;

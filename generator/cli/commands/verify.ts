@@ -1,7 +1,8 @@
-// `cycler-atlas verify --db FILE [--family ID]`: re-integrates every stored orbit over one period and
-// reports those whose closure error or Jacobi drift exceeds the limits of generator/run/verify-limits.ts
-// (at the usual tolerance 1e-12: closure 1e-8 times the orbit's largest eigenvalue modulus λ, drift
-// 1e-9). Exit 1 if any does, 2 on bad arguments.
+// `cycler-atlas verify --db FILE [--family ID]`: re-integrates every stored orbit with its monodromy over
+// one period and reports those whose closure error or Jacobi drift exceeds the limits of
+// generator/run/verify-limits.ts (at the usual tolerance 1e-12: closure 1e-8 times the largest eigenvalue
+// modulus λ of the re-integrated monodromy, drift 1e-9), or whose stored Jacobi constant, period or
+// stability indices disagree with the re-integration. Exit 1 if any does, 2 on bad arguments.
 import { Command } from 'commander';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { UsageError } from '../../run/command-line-values.ts';
@@ -14,7 +15,7 @@ const formatNumber = (value: number) => value.toExponential(2);
 
 export function createVerifyCommand(): Command {
   const command = new Command('verify')
-    .description('re-integrate every stored orbit over one period and check closure and Jacobi drift')
+    .description('re-integrate every stored orbit with its monodromy over one period; check closure, Jacobi drift and the stored values')
     .option('--db <file>', 'catalog file to check', DEFAULT_DB_PATH)
     .option('--family <id>', 'check only this family')
     .action((flags: { db: string; family?: string }) => {
@@ -28,7 +29,8 @@ export function createVerifyCommand(): Command {
         for (const f of report.failures.slice(0, FAILURES_SHOWN)) {
           console.log(
             `  ${f.orbitId}: closure ${formatNumber(f.closureError)} (limit ${formatNumber(f.limits.closure)} with λ ${formatNumber(f.largestEigenvalueModulus)}), ` +
-              `drift ${formatNumber(f.jacobiDrift)} (limit ${formatNumber(f.limits.jacobiDrift)})`,
+              `drift ${formatNumber(f.jacobiDrift)} (limit ${formatNumber(f.limits.jacobiDrift)})` +
+              f.disagreements.map((d) => `; ${d}`).join(''),
           );
         }
         if (report.failures.length > FAILURES_SHOWN) console.log(`  ... and ${report.failures.length - FAILURES_SHOWN} more`);
