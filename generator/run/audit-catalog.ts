@@ -4,6 +4,7 @@
 // is not stored: the catalog stays as it was.
 import type { AuditMiss, AuditRow } from '../../catalog-db/audit-types.ts';
 import { openCatalogForRead, openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
+import type { FamilyRow } from '../../catalog-db/types.ts';
 import { storedOrbitFootprint, type StoredFootprint } from '../core/orbits/audit-footprint.ts';
 import { auditJob, auditScanCount } from '../core/orbits/audit-job.ts';
 import type { AuditOrbit, LapSignatureJob } from '../core/orbits/audit-scan.ts';
@@ -43,18 +44,24 @@ function missOf(job: LapSignatureJob, orbit: AuditOrbit): AuditMiss {
   };
 }
 
+/** A job's families: those it wrote, and any of its signature and system another job continued into. */
+function familiesOf(job: LapSignatureJob, families: readonly FamilyRow[]): FamilyRow[] {
+  return families.filter((f) => f.configKey === job.key || (f.systemId === job.system.id && f.signature === job.seed.signature));
+}
+
 /** Each job with the footprints of its families' stored members (one half-period propagation each). */
-function readJobWork(dbPath: string, log: (line: string) => void): JobWork[] {
+function readJobWork(dbPath: string, log: (line: string) => void, shouldStop?: () => boolean): JobWork[] | null {
   const reader = openCatalogForRead(dbPath);
   try {
     const jobs = lapSignatureJobsOf(reader.jobSettings());
     const families = reader.families();
     const work = jobs.map((job) => ({ job, families: [] as StoredFootprint[][] }));
-    const total = families.filter((f) => jobs.some((j) => j.key === f.configKey)).reduce((sum, f) => sum + f.memberCount, 0);
+    const total = work.reduce((sum, w) => sum + familiesOf(w.job, families).reduce((n, f) => n + f.memberCount, 0), 0);
     const progress = createRateProgress('audit: stored members measured', total, log);
     let done = 0;
     for (const entry of work) {
-      for (const family of families.filter((f) => f.configKey === entry.job.key)) {
+      for (const family of familiesOf(entry.job, families)) {
+        if (shouldStop?.()) return null;
         entry.families.push(reader.orbits(family.id).map((o) => storedOrbitFootprint(entry.job.system.mu, o.state0, o.period, entry.job.tolerance)));
         done += family.memberCount;
         progress.step(done, family.id);
@@ -70,7 +77,12 @@ export function auditCatalog(options: AuditOptions): AuditReport {
   const startMs = Date.now();
   const gridFactor = options.gridFactor ?? DEFAULT_GRID_FACTOR;
   const log = options.log ?? ((line: string) => process.stderr.write(`${line}\n`));
-  const work = readJobWork(options.dbPath, log);
+  const row = (found: Pick<AuditRow, 'levels' | 'jobsAudited' | 'orbitsChecked' | 'misses'>): Omit<AuditRow, 'id'> => ({
+    finishedAt: new Date().toISOString(), seconds: (Date.now() - startMs) / 1000, seed: options.seed,
+    levelsPerSystem: options.levelsPerSystem, gridFactor, ...found,
+  });
+  const work = readJobWork(options.dbPath, log, options.shouldStop);
+  if (work === null) return { ...row({ levels: {}, jobsAudited: 0, orbitsChecked: 0, misses: [] }), interrupted: true };
   const levels = auditLevelsOfCatalog(work.map((w) => w.job), options.levelsPerSystem, options.seed);
   const total = work.reduce((sum, w) => sum + auditScanCount(w.job, levels[w.job.system.id]), 0);
   const progress = createRateProgress('audit: scans (level × segment × direction)', total, log);
@@ -91,10 +103,7 @@ export function auditCatalog(options: AuditOptions): AuditReport {
       break;
     }
   }
-  const audit: Omit<AuditRow, 'id'> = {
-    finishedAt: new Date().toISOString(), seconds: (Date.now() - startMs) / 1000, seed: options.seed,
-    levelsPerSystem: options.levelsPerSystem, gridFactor, levels, jobsAudited: work.length, orbitsChecked, misses,
-  };
+  const audit = row({ levels, jobsAudited: work.length, orbitsChecked, misses });
   if (interrupted) return { ...audit, interrupted };
   const writer = openCatalogForWrite(options.dbPath);
   try {

@@ -1,11 +1,12 @@
 // The audit's own search at one Jacobi level, for one lap-signature job, one x-axis segment and one start
 // direction: the roots of the seed scan (scan-axis-segment.ts, mirror theorem, Roy & Ovenden 1955),
 // corrected with Newton on ẏ0 (Howell 1984) and kept when the corrected orbit has the job's lap
-// signature, passes the L1 neck, misses both bodies and stays inside the job's limits: the orbits a
-// complete catalog must hold. Pure numerics; discovery's grid is not used (the audit checks it).
+// signature, passes the L1 neck, misses both bodies and stays inside the job's limits (C range, period,
+// the precision limit of continue-family.ts): the orbits a complete catalog must hold. Pure numerics; discovery's grid is not used (the audit checks it).
 import { lagrangePoints } from '../cr3bp/lagrange-points.ts';
 import { analyseOrbit, screenOrbit, type AnalysisContext } from './analyse-orbit.ts';
 import { cachedScan } from './cached-scan.ts';
+import { PRECISION_LIMIT_INDEX } from './continue-family.ts';
 import { correctAtFixedX0, type CorrectorOptions } from './correct-on-arc.ts';
 import type { AxisSegment, FamilyJob } from './family-job.ts';
 import { parseSignature, type LapCounts } from './lap-signature.ts';
@@ -85,7 +86,8 @@ export function auditScan(context: AuditContext, jacobi: number, segment: AxisSe
     }
     if (orbit.l1Passages === 0 || !sameLaps(orbit.laps, laps)) continue;
     if (orbit.primaryMinDistanceNd < context.primaryRadiusNd || orbit.secondaryMinDistanceNd < context.secondaryRadiusNd) continue;
-    if (orbit.jacobi < job.limits.jacobiMin || orbit.jacobi > job.limits.jacobiMax) continue;
+    if (orbit.jacobi < job.limits.jacobiMin || orbit.jacobi > job.limits.jacobiMax || periodNd > job.limits.maxPeriodNd) continue;
+    if (Math.max(Math.abs(orbit.stabilityIndex), Math.abs(orbit.verticalStabilityIndex)) > PRECISION_LIMIT_INDEX) continue;
     found.push({
       x0: corrected.x0, vy0: corrected.vy0, xHalf: corrected.shot.state[0], periodNd, jacobi: orbit.jacobi,
       halfCrossings: c.halfCrossings, segment, direction,
