@@ -10,8 +10,11 @@ import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { parseIntegerOption, parseNumberListOption, UsageError } from '../../run/command-line-values.ts';
 import { generateFromConfig, type GenerateSummary } from '../../run/generate-catalog.ts';
 import { INTERRUPTED_EXIT_CODE } from '../../run/interrupt-handler.ts';
+import { lockCatalog } from '../../run/catalog-lock.ts';
+import { catalogTotals } from '../../run/catalog-totals.ts';
 import { assertWritableCatalogPath } from '../../run/path-options.ts';
 import { RECOMPUTE_OPTION } from '../../run/settings-changes.ts';
+import type { Shard } from '../../run/shard.ts';
 import { shardFromOptions } from '../../run/shard-from-environment.ts';
 
 export const DEFAULT_CONFIG_PATH = 'catalogs/demo.yaml';
@@ -30,6 +33,7 @@ interface GenerateFlags {
   maxMembers?: string;
   progress: string;
   recomputeChanged?: boolean;
+  wait?: boolean;
 }
 
 export function createGenerateCommand(): Command {
@@ -50,6 +54,7 @@ export function createGenerateCommand(): Command {
       RECOMPUTE_OPTION,
       "delete and recompute the families whose system constants or job settings differ from the catalog's (refused without it)",
     )
+    .option('--wait', 'when another run holds the catalog, wait for it to finish (default: refuse, exit 2)')
     .action(async (configArg: string | undefined, flags: GenerateFlags) => {
       try {
         const summary = await generate(configArg, flags);
@@ -70,6 +75,19 @@ async function generate(configArg: string | undefined, flags: GenerateFlags): Pr
   }
   const single = flags.system !== undefined;
   const loaded = single ? singleFamily(configArg, flags) : configFile(configArg, flags);
+  const release = await lockCatalog('--db', flags.db, { wait: flags.wait === true, waitOption: '--wait', log: (line) => console.error(line) });
+  try {
+    return await generateLocked(loaded, flags, { workers, shard, single });
+  } finally {
+    release();
+  }
+}
+
+async function generateLocked(
+  loaded: LoadedConfig,
+  flags: GenerateFlags,
+  { workers, shard, single }: { workers?: number; shard?: Shard; single: boolean },
+): Promise<GenerateSummary> {
   const summary = await generateFromConfig(loaded, {
     dbPath: flags.db,
     workers,
@@ -79,10 +97,11 @@ async function generate(configArg: string | undefined, flags: GenerateFlags): Pr
     recomputeChanged: flags.recomputeChanged === true,
   });
   const failed = summary.jobsFailed.length;
+  const totals = catalogTotals(flags.db, summary.runId);
   console.log(
     `run ${summary.runId}${summary.interrupted ? ' interrupted' : ''}: ${summary.jobsDone} job(s) done, ${summary.jobsSkipped} skipped (done before)` +
-      `${failed > 0 ? `, ${failed} failed` : ''}; ${summary.familiesWritten} families, ${summary.membersWritten} members written ` +
-      `to ${flags.db} in ${summary.seconds.toFixed(1)} s with ${summary.workers} worker(s)`,
+      `${failed > 0 ? `, ${failed} failed` : ''}; ${totals.runFamilies} families, ${totals.runMembers} members written ` +
+      `to ${flags.db} (now ${totals.families} families, ${totals.members} members) in ${summary.seconds.toFixed(1)} s with ${summary.workers} worker(s)`,
   );
   if (summary.interrupted) console.log('interrupted: run the same command again to resume');
   return summary;

@@ -4,6 +4,7 @@ import { Command } from 'commander';
 import { MergeRefusedError, mergeCatalogs } from '../../../catalog-db/merge-catalogs.ts';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { UsageError } from '../../run/command-line-values.ts';
+import { lockCatalogNow } from '../../run/catalog-lock.ts';
 import { assertOutputIsNotInput, assertReadableCatalogPath, assertWritableCatalogPath } from '../../run/path-options.ts';
 
 export function createMergeCommand(): Command {
@@ -16,7 +17,13 @@ export function createMergeCommand(): Command {
         for (const input of inputs) assertReadableCatalogPath('IN', input);
         assertWritableCatalogPath('OUT', out);
         assertOutputIsNotInput('OUT', out, inputs.map((input) => ['IN', input] as const));
-        const report = mergeCatalogs(out, inputs);
+        const release = lockCatalogNow('OUT', out);
+        let report: ReturnType<typeof mergeCatalogs>;
+        try {
+          report = mergeCatalogs(out, inputs);
+        } finally {
+          release();
+        }
         for (const input of report.inputs) {
           console.log(
             `merged ${input.path}: ${input.familiesWritten} families written, ${input.familiesSkipped} kept from newer runs, ` +
