@@ -14,7 +14,9 @@ import { orderJobsByCost } from './order-jobs-by-cost.ts';
 import { settleSettingsChanges } from './settings-changes.ts';
 import { formatShard, selectShard, type Shard } from './shard.ts';
 import { createFamilyPool, defaultWorkerCount } from './worker-pool.ts';
-import { writeJobResult } from './write-job-result.ts';
+import { createJobWriter } from './write-job-result.ts';
+import { sharedDiscoveryGrids, startSharedDiscovery } from './shared-discovery.ts';
+import { storedFamiliesOfJob } from './stored-families-of-job.ts';
 
 export interface GenerateOptions {
   dbPath: string;
@@ -121,7 +123,9 @@ async function runJobs(
   log: (line: string) => void,
   summary: GenerateSummary,
 ): Promise<void> {
-  const threads = Math.max(1, Math.min(options.workers ?? defaultWorkerCount(), pending.length));
+  // Discovery grids run in parallel too: there may be more of them than jobs.
+  const parallelWork = Math.max(pending.length, sharedDiscoveryGrids(pending).size);
+  const threads = Math.max(1, Math.min(options.workers ?? defaultWorkerCount(), parallelWork));
   summary.workers = threads;
   const display = chooseDisplay(options.progress ?? 'auto', log);
   display.begin(pending.length);
@@ -134,27 +138,35 @@ async function runJobs(
           pool.requestStop();
         }, display.log);
   try {
+    const discovery = startSharedDiscovery(pending, pool, display.log);
     await Promise.all(
       pending.map(async (job) => {
         let jobStartMs = Date.now(); // reset when the job leaves the queue (its first progress message)
         let started = false;
+        const jobWriter = createJobWriter(writer, runId, job);
         try {
-          const result = await pool.run(job, (progress) => {
-            if (!started) {
-              started = true;
-              jobStartMs = Date.now();
-            }
-            display.progress(job, progress);
-          });
+          const discovered = await discovery.resultsFor(job);
+          const result = discovered === null
+            ? { bundles: [], interrupted: true } // a stop request ended the grids this job needs
+            : await pool.run(job, {
+              onProgress: (progress) => {
+                if (!started) {
+                  started = true;
+                  jobStartMs = Date.now();
+                }
+                display.progress(job, progress);
+              },
+              onFamily: (bundle) => jobWriter.family(bundle),
+            }, { discovered, stored: storedFamilies(options.dbPath, job.key) });
           if (result.interrupted) summary.interrupted = true;
           for (const note of result.notes ?? []) display.log(`note: ${note}`);
-          const written = writeJobResult(writer, runId, job, result);
+          const written = jobWriter.finish(result);
           summary.familiesWritten += written.families;
           summary.membersWritten += written.members;
           if (written.done) summary.jobsDone += 1;
           summary.jobSeconds[job.key] = (Date.now() - jobStartMs) / 1000;
           const seconds = summary.jobSeconds[job.key]!.toFixed(1);
-          const what = written.families === 0 ? 'no family found' : `${written.families} famil${written.families === 1 ? 'y' : 'ies'}, ${written.members} members`;
+          const what = written.families === 0 ? 'no new family' : `${written.families} famil${written.families === 1 ? 'y' : 'ies'}, ${written.members} members`;
           display.jobEnded(job, `${written.done ? 'done' : 'interrupted'} ${job.key}: ${what} (${seconds} s)`);
         } catch (error) {
           const message = error instanceof Error ? error.message : String(error);
@@ -167,6 +179,16 @@ async function runJobs(
     removeHandler();
     display.end();
     await pool.destroy();
+  }
+}
+
+/** The job's families an earlier, stopped run already wrote (the job goes on after them). */
+function storedFamilies(dbPath: string, jobKey: string) {
+  const reader = openCatalogForRead(dbPath);
+  try {
+    return storedFamiliesOfJob(reader, jobKey);
+  } finally {
+    reader.close();
   }
 }
 

@@ -1,14 +1,25 @@
-// A pool of worker threads (tinypool) running FamilyJobs, with per-job progress and a shared stop flag.
+// A pool of worker threads (tinypool) running FamilyJobs and discovery grids, with per-task messages
+// and a shared stop flag.
 import { availableParallelism } from 'node:os';
 import { MessageChannel } from 'node:worker_threads';
 import { Tinypool } from 'tinypool';
-import type { FamilyJob, JobProgress, JobResult } from '../core/orbits/family-job.ts';
-import type { FamilyTask } from './family-worker.ts';
+import type { FamilyBundle } from '../../catalog-db/types.ts';
+import type { DiscoveryRequest, DiscoveryResult } from '../core/orbits/discovery/discover-candidates.ts';
+import type { FamilyJob, JobInputs, JobProgress, JobResult } from '../core/orbits/family-job.ts';
+import type { DiscoveryTask, FamilyTask, WorkerMessage } from './family-worker.ts';
+
+export interface JobHandlers {
+  onProgress(progress: JobProgress): void;
+  /** A finished family, as soon as the worker has it (the run layer writes it at once). */
+  onFamily?(bundle: FamilyBundle): void;
+}
 
 export interface FamilyPool {
   readonly threads: number;
-  run(job: FamilyJob, onProgress: (progress: JobProgress) => void): Promise<JobResult>;
-  /** Running jobs stop after their current member; queued jobs return at once without work. */
+  run(job: FamilyJob, handlers: JobHandlers | ((progress: JobProgress) => void), inputs?: JobInputs): Promise<JobResult>;
+  /** One discovery grid; onGrid gets the grid points done so far after each Jacobi level. */
+  discover(request: DiscoveryRequest, onGrid: (pointsDone: number, points: number) => void): Promise<DiscoveryResult>;
+  /** Running tasks stop after their current member or grid level; queued jobs return at once without work. */
   requestStop(): void;
   destroy(): Promise<void>;
 }
@@ -26,13 +37,25 @@ export function createFamilyPool(threads: number): FamilyPool {
     // Workers are reused across jobs: each keeps its integrator workspaces warm.
     idleTimeout: 60_000,
   });
+  const send = <T>(task: Omit<FamilyTask, 'progressPort' | 'stopFlag'> | Omit<DiscoveryTask, 'progressPort' | 'stopFlag'>, onMessage: (m: WorkerMessage) => void): Promise<T> => {
+    const channel = new MessageChannel();
+    channel.port1.on('message', onMessage);
+    const full = { ...task, progressPort: channel.port2, stopFlag };
+    return (pool.run(full, { transferList: [channel.port2] }) as Promise<T>).finally(() => channel.port1.close());
+  };
   return {
     threads,
-    run(job, onProgress) {
-      const channel = new MessageChannel();
-      channel.port1.on('message', (progress: JobProgress) => onProgress(progress));
-      const task: FamilyTask = { job, progressPort: channel.port2, stopFlag };
-      return (pool.run(task, { transferList: [channel.port2] }) as Promise<JobResult>).finally(() => channel.port1.close());
+    run(job, handlers, inputs = {}) {
+      const { onProgress, onFamily } = typeof handlers === 'function' ? { onProgress: handlers, onFamily: undefined } : handlers;
+      return send<JobResult>({ kind: 'family', job, inputs }, (m) => {
+        if (m.type === 'progress') onProgress(m.progress);
+        else if (m.type === 'family') onFamily?.(m.bundle);
+      });
+    },
+    discover(request, onGrid) {
+      return send<DiscoveryResult>({ kind: 'discovery', request }, (m) => {
+        if (m.type === 'grid') onGrid(m.pointsDone, m.points);
+      });
     },
     requestStop() {
       Atomics.store(stopFlag, 0, 1);

@@ -46,8 +46,8 @@ describe('createFamilyPool', () => {
     });
     expect(asked).toBe(true);
     expect(result.interrupted).toBe(true);
-    expect(result.bundles).toHaveLength(1);
-    expect(result.bundles[0]!.orbits.length).toBeLessThan(maxMembers / 2);
+    // The family was not finished, so it does not leave the job (a resumed run computes it again).
+    expect(result.bundles).toHaveLength(0);
     // A job that starts after the stop does no work at all.
     const late = await pool.run(lyapunovJob('L1', 10), () => {});
     expect(late).toEqual({ bundles: [], interrupted: true });

@@ -2,6 +2,7 @@
 // The run layer builds jobs from the validated config and writes the bundles to the catalog.
 import type { FamilyBundle } from '../../../catalog-db/types.ts';
 import type { DiscoveryResult } from './discovery/discover-candidates.ts';
+import type { StoredFamily } from './stored-family-trace.ts';
 
 export type AxisSegment = 'far-primary' | 'between' | 'far-secondary';
 
@@ -106,9 +107,13 @@ export interface JobHooks {
   shouldStop?(): boolean;
 }
 
-/** What the run layer may hand a job ready-made: discovery grids shared by the jobs of a system. */
+/**
+ * What the run layer may hand a job ready-made: discovery grids shared by the jobs of a system, and the
+ * finished families an earlier, stopped run of this job already wrote (resume goes on after them).
+ */
 export interface JobInputs {
   discovered?: readonly DiscoveryResult[];
+  stored?: readonly StoredFamily[];
 }
 
 export interface JobResult {

@@ -20,6 +20,8 @@ import { jobDiscoveryRequests } from './discovery/job-discovery-requests.ts';
 import { candidatesOfSignature, orderCandidates } from './discovery/order-candidates.ts';
 import { refineCandidate } from './discovery/refine-candidate.ts';
 import { screenStableMembers } from './screen-stable-members.ts';
+import { asFamilyMembers } from './audit-footprint.ts';
+import { storedFamilyTrace } from './stored-family-trace.ts';
 
 interface Seed {
   corrected: CorrectedOrbit;
@@ -122,7 +124,7 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
     // family's ends or between sparse members): then it is that family again.
     if (result.members.filter((m, i) => i % 4 === 0 && isKnown(m)).length >= 2) return 'known';
     continued.push(result.members);
-    coverage?.addFamily(result.members, seed.halfCrossings);
+    coverage?.addFamily(result.members.map((m) => ({ x0: m.x0, vy0: m.vy0, xHalf: m.xHalf, vyHalf: m.vyHalf, jacobi: m.analysis.jacobi })), seed.halfCrossings);
     const map = locateStabilityChanges(context, seed.halfCrossings, result.members, job.indexTolerance, corrector, hooks.shouldStop);
     if (!map) return 'interrupted';
     const bundle = buildFamilyBundle(system, {
@@ -150,6 +152,10 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
 
   let coverage: FamilyCoverage | null = null;
   const finish = (interrupted: boolean): JobResult => (notes.length > 0 ? { bundles, interrupted, notes } : { bundles, interrupted });
+  // Families a stopped run already wrote for this job come first, in their order: the search skips
+  // their seeds, and the families it finds next get the letters they would have had in one run.
+  const stored = (inputs.stored ?? []).map((family) => storedFamilyTrace(mu, family, tolerance));
+  for (const family of stored) continued.push(asFamilyMembers(family.points));
   if (rule.kind !== 'lap-signature') {
     for (const seed of referenceSeeds()) {
       if (hooks.shouldStop?.()) return finish(true);
@@ -161,6 +167,7 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
   const discovered = inputs.discovered ?? discoverForJob(job, hooks);
   if (discovered === null) return finish(true);
   coverage = new FamilyCoverage(mu, new Map(discovered.map((d) => [FamilyCoverage.gridId(d.request.segment, d.request.direction), { xs: d.xs, levels: d.request.levels }])));
+  for (const family of stored) coverage.addFamily(family.points, family.halfCrossings);
   const wanted = discovered
     .filter((d) => rule.segments.includes(d.request.segment) && rule.directions.includes(d.request.direction))
     .flatMap((d) => candidatesOfSignature(d.candidates, laps!, rule.maxHalfCrossings));

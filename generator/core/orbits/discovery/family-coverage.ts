@@ -3,7 +3,15 @@
 // with the direction of ẏ there (same crossing count: the second half mirrors the first). A covered root
 // edge lies, to the grid's resolution, on a family already continued: discovery skips it.
 import type { AxisSegment } from '../family-job.ts';
-import type { FamilyMember } from '../family-member.ts';
+
+/** One member of a family as the coverage reads it: both perpendicular crossings, ẏ there, and C. */
+export interface FamilyTracePoint {
+  x0: number;
+  vy0: number;
+  xHalf: number;
+  vyHalf: number;
+  jacobi: number;
+}
 
 interface GridAxes {
   xs: readonly number[];
@@ -35,10 +43,10 @@ export class FamilyCoverage {
   }
 
   /** Marks the grid edges along the family's two curves in the (x0, C) grids. */
-  addFamily(members: readonly FamilyMember[], halfCrossings: number): void {
+  addFamily(members: readonly FamilyTracePoint[], halfCrossings: number): void {
     const curves = [
-      members.map((m) => ({ x: m.x0, vy: m.vy0, jacobi: m.analysis.jacobi })),
-      members.map((m) => ({ x: m.xHalf, vy: m.vyHalf, jacobi: m.analysis.jacobi })),
+      members.map((m) => ({ x: m.x0, vy: m.vy0, jacobi: m.jacobi })),
+      members.map((m) => ({ x: m.xHalf, vy: m.vyHalf, jacobi: m.jacobi })),
     ];
     for (const curve of curves) {
       for (let n = 0; n + 1 < curve.length; n++) this.markSegment(curve[n]!, curve[n + 1]!, halfCrossings);
