@@ -43,6 +43,8 @@ describe('audits table', () => {
     expect(auditSummary(readLatestAudit(path))).toBe(
       'Completeness audit of 2026-01-02: 17 symmetric orbits found afresh at 4 random Jacobi levels (seed 4242) for 3 lap signatures; 1 lies on no catalogued family.',
     );
+    expect(auditSummary(readLatestAudit(path), '2026-01-03T00:00:00.000Z')).toMatch(/family \(the catalog has been generated further since\)\.$/);
+    expect(auditSummary(readLatestAudit(path), '2026-01-01T00:00:00.000Z')).toMatch(/family\.$/);
   });
 
   it('gives undefined for a catalog never audited', () => {
