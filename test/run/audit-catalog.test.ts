@@ -5,7 +5,8 @@
 //   deleted family (mirror theorem, Roy & Ovenden 1955: each is a symmetric periodic orbit of that family);
 // - membership holds at either perpendicular crossing: an orbit re-corrected from its other crossing
 //   (mirror theorem) is on the family, and so is one between members of a thinned family (refinement);
-// - stopped (Ctrl-C) after its first scan, it says so and stores nothing (common practice).
+// - stopped (Ctrl-C) after its first scan, it says so and stores nothing (common practice);
+// - bad arguments of audit and of generate --shard auto give one line and exit 2.
 import { copyFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import Database from 'better-sqlite3';
@@ -14,7 +15,8 @@ import { prepareAuditStore } from '../../catalog-db/audit-store.ts';
 import type { AuditRow } from '../../catalog-db/audit-types.ts';
 import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
 import { openSqliteForRead } from '../../catalog-db/open-sqlite.ts';
-import { formatMiss } from '../../generator/cli/commands/audit.ts';
+import { createAuditCommand, formatMiss } from '../../generator/cli/commands/audit.ts';
+import { createGenerateCommand } from '../../generator/cli/commands/generate.ts';
 import { storedOrbitFootprint, type StoredFootprint } from '../../generator/core/orbits/audit-footprint.ts';
 import { liesOnCatalogFamily } from '../../generator/core/orbits/audit-membership.ts';
 import { auditContext, type AuditOrbit } from '../../generator/core/orbits/audit-scan.ts';
@@ -25,6 +27,7 @@ import { lapSignatureJobsOf } from '../../generator/run/audit-jobs-of-catalog.ts
 import { generateCatalog } from '../../generator/run/generate-catalog.ts';
 import { useTempCatalogDir } from '../catalog-db/temp-catalog-path.ts';
 import { runCli } from '../cli/run-cli.ts';
+import { runCommand } from './run-command.ts';
 
 const configPath = fileURLToPath(new URL('./fixtures/audit-catalog.yaml', import.meta.url));
 const tempPath = useTempCatalogDir();
@@ -126,5 +129,44 @@ describe('cycler-atlas audit', () => {
     const between = members[Math.floor(members.length / 2) + 6];
     const orbit: AuditOrbit = { ...between, halfCrossings: 1, segment: 'far-primary', direction: -1 };
     expect(liesOnCatalogFamily(context, orbit, [thinned])).toBe(true);
+  });
+});
+
+describe('audit and generate --shard auto: bad arguments in one line naming the option or variable, exit 2 (common practice)', () => {
+  const cleanEnv = () => {
+    const saved = { ...process.env };
+    for (const name of ['SLURM_ARRAY_TASK_ID', 'SLURM_ARRAY_TASK_MIN', 'SLURM_ARRAY_TASK_COUNT', 'SLURM_ARRAY_TASK_STEP', 'JOB_COMPLETION_INDEX']) delete process.env[name];
+    return () => { process.env = saved; };
+  };
+
+  it.each([
+    [createAuditCommand, ['--levels', '0'], '--levels: "0" is not allowed (an integer from 1 to 1000)'],
+    [createAuditCommand, ['--seed', '-4'], '--seed: "-4" is not allowed (an integer from 0 to 4294967295)'],
+    [createAuditCommand, ['--grid-factor', '0.5'], '--grid-factor: "0.5" is not allowed (an integer from 1 to 64)'],
+    [createAuditCommand, ['--db', 'test/run/fixtures/none.sqlite'], '--db: "test/run/fixtures/none.sqlite" does not exist (a catalog file written by generate)'],
+    [createGenerateCommand, ['--shard', 'auto', '--db', 'test/run/fixtures/none.sqlite'],
+      '--shard auto: neither SLURM_ARRAY_TASK_ID (SLURM job array) nor JOB_COMPLETION_INDEX (Kubernetes Indexed Job) is set; give --shard k/n instead'],
+    [createGenerateCommand, ['--shard', '1/2', '--shard-count', '2'], '--shard-count: only allowed with --shard auto (got --shard 1/2)'],
+  ] as const)('%#: %j', async (create, args, line) => {
+    const restore = cleanEnv();
+    try {
+      const { code, stderr } = await runCommand(create, [...args]);
+      expect(stderr).toBe(`${line}\n`);
+      expect(code).toBe(2);
+    } finally {
+      restore();
+    }
+  });
+
+  it('names a SLURM variable out of range with its value and the allowed ids', async () => {
+    const restore = cleanEnv();
+    Object.assign(process.env, { SLURM_ARRAY_TASK_ID: '9', SLURM_ARRAY_TASK_MIN: '5', SLURM_ARRAY_TASK_COUNT: '4' });
+    try {
+      const { code, stderr } = await runCommand(createGenerateCommand, ['--shard', 'auto', '--db', 'test/run/fixtures/none.sqlite']);
+      expect(stderr).toBe('SLURM_ARRAY_TASK_ID: "9" is not allowed (an integer from 5 to 8: SLURM_ARRAY_TASK_MIN to MIN + 3)\n');
+      expect(code).toBe(2);
+    } finally {
+      restore();
+    }
   });
 });
