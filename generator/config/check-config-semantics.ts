@@ -9,6 +9,7 @@ import { familyKeyOf, resolveLimits, resolveSearch, type Sourced } from './famil
 import { formatNumber, formatRange, formatValue } from './format-value.ts';
 import { parseLapSignature } from './lap-signature-pattern.ts';
 import { resolveSystem } from './resolve-system.ts';
+import { checkSystemPhysics } from './check-system-physics.ts';
 import { systemJacobiBounds, type SystemJacobiBounds } from './system-jacobi-bounds.ts';
 import { DEFAULT_SEARCH, defaultJacobiLimits } from './default-settings.ts';
 
@@ -25,12 +26,8 @@ export function checkConfigSemantics(config: CatalogConfig): ConfigIssue | null 
         message: `${formatValue(spec.secondaryLetter)} is the letter of both bodies of ${spec.id} (lap signatures need two different letters)`,
       };
     }
-    if (!(spec.mu > 0 && spec.mu <= 0.5)) {
-      return {
-        path: ['systems', index],
-        message: `mass ratio ${formatNumber(spec.mu)} of ${spec.id} is outside the allowed range (0, 0.5] (the primary must be the heavier body)`,
-      };
-    }
+    const physicsIssue = checkSystemPhysics(entry, index, spec);
+    if (physicsIssue) return physicsIssue;
     systems.set(spec.id, { spec, bounds: systemJacobiBounds(spec.mu) });
   }
 

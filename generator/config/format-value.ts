@@ -3,10 +3,14 @@
 /** Numbers in plain or exponent form (1e-6 rather than 0.000001); strings quoted; others as short JSON. */
 export function formatValue(value: unknown): string {
   if (typeof value === 'number') return formatNumber(value);
-  if (typeof value === 'string') return JSON.stringify(value);
+  if (typeof value === 'string') return shorten(JSON.stringify(value));
   if (value === undefined) return 'nothing';
-  const json = JSON.stringify(value) ?? String(value);
-  return json.length > 60 ? `${json.slice(0, 57)}...` : json;
+  return shorten(JSON.stringify(value) ?? String(value));
+}
+
+/** At most 60 characters, so that a message stays one short line whatever the value. */
+function shorten(text: string): string {
+  return text.length > 60 ? `${text.slice(0, 57)}...` : text;
 }
 
 export function formatNumber(value: number): string {

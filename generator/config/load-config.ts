@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { basename } from 'node:path';
 import { parseDocument } from 'yaml';
 import type { CatalogConfig } from './config-schema.ts';
+import { decodeConfigText } from './decode-config-text.ts';
 import { ConfigError, validateConfig } from './validate-config.ts';
 
 export interface LoadedConfig {
@@ -14,14 +15,15 @@ export interface LoadedConfig {
 
 export function loadConfig(configPath: string): LoadedConfig {
   const label = basename(configPath);
-  let text: string;
+  let bytes: Buffer;
   try {
-    text = readFileSync(configPath, 'utf8');
+    bytes = readFileSync(configPath);
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'the file does not exist' : `cannot read the file (${code ?? String(error)})`;
+    const why = code === 'ENOENT' ? 'the file does not exist' : code === 'EISDIR' ? 'is a directory (a YAML file)' : `cannot read the file (${code ?? String(error)})`;
     throw new ConfigError(`config ${configPath}: ${why}`);
   }
+  const text = decodeConfigText(bytes, label);
   return { config: parseConfigText(text, label), configPath, text };
 }
 
@@ -35,5 +37,19 @@ export function parseConfigText(text: string, label: string): CatalogConfig {
     const detail = error.message.split('\n')[0]?.replace(/ at line \d+, column \d+:?$/, '');
     throw new ConfigError(`config ${label}: YAML syntax error${where}: ${detail}`);
   }
-  return validateConfig(document.toJS(), label);
+  return validateConfig(toPlainObject(document, label), label);
+}
+
+/** Aliases may repeat a node at most this many times in all: a real config uses a handful, while a
+ *  "billion laughs" file expands a few lines into millions of nodes. */
+const MAX_ALIAS_COUNT = 1000;
+
+function toPlainObject(document: ReturnType<typeof parseDocument>, label: string): unknown {
+  try {
+    return document.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    if (!/alias/i.test(message)) throw error;
+    throw new ConfigError(`config ${label}: YAML aliases expand too far (at most ${MAX_ALIAS_COUNT} alias uses; ${message.split('\n')[0]})`);
+  }
 }

@@ -12,7 +12,7 @@ import { createGenerateCommand } from '../../generator/cli/commands/generate.ts'
 import { createMergeCommand } from '../../generator/cli/commands/merge.ts';
 import { createVerifyCommand } from '../../generator/cli/commands/verify.ts';
 import { catalogChecksum } from './catalog-checksum.ts';
-import { copyCatalog, generateTiny, tinyConfigWith, writeText } from './hostile-inputs.fixture.ts';
+import { copyCatalog, generateTiny, TINY_CONFIG, tinyConfigWith, writeText } from './hostile-inputs.fixture.ts';
 import { runCommand } from './run-command.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'cycler-atlas-hostile-'));
@@ -116,7 +116,53 @@ const cases: HostileCase[] = [
   { item: 11, what: "merge's input a directory", create: merge, args: () => [join(dir, 'merge-out.sqlite'), folder],
     firstLine: /^IN: "\S*a-folder" is a directory \(a catalog file written by generate\)$/,
     catalogs: () => [join(dir, 'merge-out.sqlite')] },
+  {
+    item: 12, what: 'a YAML alias bomb', create: generate, args: () => [config('bomb.yaml', aliasBomb()), '--db', base],
+    firstLine: /^config bomb\.yaml: YAML aliases expand too far \(at most 1000 alias uses; /,
+  },
+  {
+    item: 12, what: 'a UTF-16 config', create: generate, args: () => [writeText(dir, 'utf16.yaml', utf16(TINY_CONFIG)), '--db', base],
+    firstLine: /^config utf16\.yaml: is UTF-16 text \(save it as UTF-8\) \(a catalog config is YAML text in UTF-8\)$/,
+  },
+  {
+    item: 12, what: 'a binary file as config', create: generate,
+    args: () => [writeText(dir, 'binary.yaml', Buffer.from([0x53, 0x51, 0x4c, 0x69, 0x74, 0x65, 0x00, 0x03, 0xff, 0x10])), '--db', base],
+    firstLine: /^config binary\.yaml: holds a NUL byte at offset 6, so it is not text \(UTF-16 or a binary file\?\) \(a catalog config is YAML text in UTF-8\)$/,
+  },
+  {
+    item: 12, what: 'a near-zero GM (μ ≈ 1e-306)', create: generate,
+    args: () => [config('gm.yaml', tinyConfigWith('preset: earth-moon', '{ preset: earth-moon, secondaryGmKm3S2: 1.0e-300 }')), '--db', base],
+    firstLine: /^config gm\.yaml: systems\[0\]\.secondaryGmKm3S2: 1e-300 gives mass ratio 2\.50878e-306 for earth-moon, outside the allowed range \[1e-10, 0\.5\]/,
+  },
+  {
+    item: 13, what: 'a Moon radius larger than its distance to L1', create: generate,
+    args: () => [config('radius.yaml', tinyConfigWith('preset: earth-moon', '{ preset: earth-moon, secondaryRadiusKm: 400000 }')), '--db', base],
+    // x(L1) = 0.836915 for Earth–Moon (DESIGN.md, Szebehely 1967): the Moon's centre is (1 − μ − x(L1)) · 384400 km ≈ 58019 km from L1.
+    firstLine: /^config radius\.yaml: systems\[0\]\.secondaryRadiusKm: 400000 is outside the allowed range \(0\.0, 5801[89]\.\d\) for earth-moon \(km; the Moon must end before L1/,
+  },
+  {
+    item: 13, what: 'a length unit of 1e-9 km', create: generate,
+    args: () => [config('length.yaml', tinyConfigWith('preset: earth-moon', '{ preset: earth-moon, lengthUnitKm: 1.0e-9 }')), '--db', base],
+    firstLine: /^config length\.yaml: systems\[0\]\.lengthUnitKm: 1e-9 is too small for earth-moon: the Earth \(radius 6378\.137 km\) must end before L1/,
+  },
+  {
+    item: 13, what: 'μ ≈ 1e-24', create: generate,
+    args: () => [config('tiny-mu.yaml', tinyConfigWith('preset: earth-moon', '{ preset: earth-moon, secondaryGmKm3S2: 4.0e-19 }')), '--db', base],
+    firstLine: /^config tiny-mu\.yaml: systems\[0\]\.secondaryGmKm3S2: 4e-19 gives mass ratio 1\.00\d*e-24 for earth-moon, outside the allowed range \[1e-10, 0\.5\]/,
+  },
 ];
+
+/** Each level repeats the one before nine times: 12 lines that expand to 9^12 nodes ("billion laughs"). */
+function aliasBomb(): string {
+  const lines = ['l0: &l0 [x, x, x, x, x, x, x, x, x]'];
+  for (let level = 1; level < 12; level++) lines.push(`l${level}: &l${level} [${Array(9).fill(`*l${level - 1}`).join(', ')}]`);
+  return `${lines.join('\n')}\n`;
+}
+
+/** UTF-16 little-endian with its byte-order mark, as some editors save by default. */
+function utf16(text: string): Buffer {
+  return Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(text, 'utf16le')]);
+}
 
 describe('hostile inputs: one line, exit 2, catalogs unchanged', () => {
   beforeAll(async () => {
