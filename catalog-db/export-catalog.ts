@@ -9,9 +9,11 @@ import {
   type CatalogExportOrbit,
   type CatalogExportScreening,
 } from './catalog-export-types.ts';
-import { formatCsvRecord, type CsvValue } from './csv-field.ts';
+import { formatCsvRecord } from './csv-field.ts';
 import { annotateFamilyOrbits, type OrbitAnnotations } from './orbit-annotations.ts';
-import type { CatalogReader, FamilyRow, ModelScreeningRow, OrbitRow } from './types.ts';
+import type { OrbitFieldSource } from './orbit-field-types.ts';
+import { CATALOG_CSV_FIELDS } from './orbit-fields.ts';
+import type { CatalogReader, FamilyRow, ModelScreeningRow, OrbitRow, SystemRow } from './types.ts';
 
 export interface ExportOptions {
   familyId?: string; // only this family (with its system and run)
@@ -70,55 +72,30 @@ function screeningOf({ orbitId: _o, familyId: _f, model: _m, ...rest }: ModelScr
   return rest;
 }
 
-/** Columns of the CSV, in order: header name and how to get the value (new columns go last). */
-const csvColumns: ReadonlyArray<readonly [string, (family: FamilyRow, orbit: OrbitRow, notes: OrbitAnnotations) => CsvValue]> = [
-  ['familyId', (f) => f.id],
-  ['familySignature', (f) => f.signature],
-  ['familyName', (f) => f.name],
-  ['orbitId', (_, o) => o.id],
-  ['seq', (_, o) => o.seq],
-  ['arclength', (_, o) => o.arclength],
-  ['x0', (_, o) => o.state0[0]],
-  ['y0', (_, o) => o.state0[1]],
-  ['z0', (_, o) => o.state0[2]],
-  ['vx0', (_, o) => o.state0[3]],
-  ['vy0', (_, o) => o.state0[4]],
-  ['vz0', (_, o) => o.state0[5]],
-  ['jacobi', (_, o) => o.jacobi],
-  ['period', (_, o) => o.period],
-  ['periodDays', (_, o) => o.periodDays],
-  ['stabilityIndex', (_, o) => o.stabilityIndex],
-  ['verticalStabilityIndex', (_, o) => o.verticalStabilityIndex],
-  ['stable', (_, o) => o.stable],
-  ['primaryMinRadiusKm', (_, o) => o.primaryMinRadiusKm],
-  ['primaryMinAltKm', (_, o) => o.primaryMinAltKm],
-  ['secondaryMinRadiusKm', (_, o) => o.secondaryMinRadiusKm],
-  ['secondaryMinAltKm', (_, o) => o.secondaryMinAltKm],
-  ['maxDistanceKm', (_, o) => o.maxDistanceKm],
-  ['l1Passages', (_, o) => o.l1Passages],
-  ['signature', (_, o) => o.signature],
-  ['synodicP', (_, o) => o.synodicP],
-  ['synodicQ', (_, o) => o.synodicQ],
-  ['synodicRelError', (_, o) => o.synodicRelError],
-  ['closureError', (_, o) => o.closureError],
-  ['jacobiDrift', (_, o) => o.jacobiDrift],
-  // Empty where the member was not screened (or the model not run for it).
-  ['holdRadiusKm', (_, o, n) => n.holdRadius.get(o.id)?.holdRadiusKm ?? null],
-  ['sunSurvivingFraction', (_, o, n) => n.screenings.get(o.id)?.bicircular?.survivingFraction ?? null],
-  ['eccentricitySurvivingFraction', (_, o, n) => n.screenings.get(o.id)?.elliptic?.survivingFraction ?? null],
-  // 1 or -1 on a vertically critical member (branch point of a spatial family), empty elsewhere.
-  ['verticalCriticalIndex', (_, o, n) => n.verticalBranchPoint.get(o.id)?.verticalIndex ?? null],
-];
+/** What the other tables store for an orbit, as the orbit-field getters read it. */
+function fieldSource(family: FamilyRow, system: SystemRow, orbit: OrbitRow, notes: OrbitAnnotations): OrbitFieldSource {
+  return {
+    orbit, family, system,
+    holdRadiusKm: notes.holdRadius.get(orbit.id)?.holdRadiusKm ?? null,
+    sunSurvivingFraction: notes.screenings.get(orbit.id)?.bicircular?.survivingFraction ?? null,
+    eccentricitySurvivingFraction: notes.screenings.get(orbit.id)?.elliptic?.survivingFraction ?? null,
+    verticalCriticalIndex: notes.verticalBranchPoint.get(orbit.id)?.verticalIndex ?? null,
+  };
+}
 
-/** One row per orbit after a header row; families in catalog order, orbits in family order. */
+/** One row per orbit after a header row (the columns of orbit-fields.ts); families in catalog order, orbits in family order. */
 export function exportCatalogCsv(reader: CatalogReader, options: Pick<ExportOptions, 'familyId'> = {}): string {
   const families = selectFamilies(reader, options.familyId, 'exportCatalogCsv');
-  const lines = [formatCsvRecord(csvColumns.map(([name]) => name))];
+  const systems = new Map(reader.systems().map((system) => [system.id, system]));
+  const lines = [formatCsvRecord(CATALOG_CSV_FIELDS.map((field) => field.csv!))];
   for (const family of families) {
+    const system = systems.get(family.systemId);
+    if (system === undefined) throw new Error(`exportCatalogCsv: family ${family.id} has no system row ${family.systemId}`);
     const orbits = reader.orbits(family.id);
     const notes = annotateFamilyOrbits(reader, family.id, orbits, reader.bifurcations(family.id));
     for (const orbit of orbits) {
-      lines.push(formatCsvRecord(csvColumns.map(([, value]) => value(family, orbit, notes))));
+      const source = fieldSource(family, system, orbit, notes);
+      lines.push(formatCsvRecord(CATALOG_CSV_FIELDS.map((field) => field.get(source))));
     }
   }
   return lines.join('');

@@ -22,14 +22,19 @@ export function annotateFamilyOrbits(reader: CatalogReader, familyId: string, or
     entry[row.model] = row;
     screenings.set(row.orbitId, entry);
   }
+  return { holdRadius, screenings, verticalBranchPoint: verticalBranchPoints(orbits, bifurcations) };
+}
+
+/** The vertically critical members of a family, by orbit id (also used by the site, without a reader). */
+export function verticalBranchPoints(orbits: readonly OrbitRow[], bifurcations: readonly BifurcationRow[]): Map<string, VerticalBranchPoint> {
   // Bifurcation rows copy the arclength of the member stored there (build-family-bundle.ts), so the
   // match is exact.
   const orbitAt = new Map(orbits.map((orbit) => [orbit.arclength, orbit.id] as const));
-  const verticalBranchPoint = new Map<string, VerticalBranchPoint>();
+  const found = new Map<string, VerticalBranchPoint>();
   for (const bifurcation of bifurcations) {
     const orbitId = orbitAt.get(bifurcation.arclength);
     if (orbitId === undefined || bifurcation.plane !== 'vertical') continue;
-    verticalBranchPoint.set(orbitId, { bifurcationId: bifurcation.id, verticalIndex: bifurcation.kind === 'tangent' ? 1 : -1 });
+    found.set(orbitId, { bifurcationId: bifurcation.id, verticalIndex: bifurcation.kind === 'tangent' ? 1 : -1 });
   }
-  return { holdRadius, screenings, verticalBranchPoint };
+  return found;
 }

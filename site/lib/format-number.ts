@@ -26,6 +26,12 @@ export function formatFixed(value: number | null | undefined, decimals = 0): str
   return format.format(value);
 }
 
+/** A fraction (0..1) as a whole percent. */
+export function formatPercent(fraction: number | null | undefined): string {
+  if (fraction === null || fraction === undefined || !Number.isFinite(fraction)) return DASH;
+  return `${formatFixed(fraction * 100, 0)} %`;
+}
+
 /** Shortest text that reads back to the same double (for states and anything copied into other tools). */
 export function formatExact(value: number | null | undefined): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return DASH;

@@ -1,5 +1,5 @@
 // The finder's filters written as SQL over the catalog file: the independent reference the finder's
-// browser-side filter is checked against (same meaning, different code path).
+// browser-side filter is checked against (same meaning, different code path), by the filters' URL keys.
 import type { FinderFilter } from '../../site/scripts/finder/finder-filter.ts';
 
 export function finderSql(filter: FinderFilter): { sql: string; params: unknown[] } {
@@ -9,27 +9,28 @@ export function finderSql(filter: FinderFilter): { sql: string; params: unknown[
     where.push(clause);
     params.push(...values);
   };
-  if (filter.system !== null) add('f.system_id = ?', filter.system);
-  if (filter.family !== null) add('o.family_id = ?', filter.family);
-  if (filter.signature !== null) add('o.signature = ?', filter.signature);
-  if (filter.jacobiMin !== null) add('o.jacobi >= ?', filter.jacobiMin);
-  if (filter.jacobiMax !== null) add('o.jacobi <= ?', filter.jacobiMax);
-  if (filter.periodDaysMin !== null) add('o.period_days >= ?', filter.periodDaysMin);
-  if (filter.periodDaysMax !== null) add('o.period_days <= ?', filter.periodDaysMax);
-  if (filter.stableOnly) add('o.stable = 1');
-  if (filter.nuAbsMax !== null) add('abs(o.stability_index) <= ?', filter.nuAbsMax);
-  if (filter.vertical === 'stable') add('abs(o.vertical_stability_index) < 1');
-  if (filter.vertical === 'unstable') add('abs(o.vertical_stability_index) >= 1');
-  if (filter.primaryAltKmMin !== null) add('o.primary_min_alt_km >= ?', filter.primaryAltKmMin);
-  if (filter.primaryAltKmMax !== null) add('o.primary_min_alt_km <= ?', filter.primaryAltKmMax);
-  if (filter.secondaryAltKmMin !== null) add('o.secondary_min_alt_km >= ?', filter.secondaryAltKmMin);
-  if (filter.secondaryAltKmMax !== null) add('o.secondary_min_alt_km <= ?', filter.secondaryAltKmMax);
-  if (filter.lock === 'any') add('o.synodic_p IS NOT NULL AND o.synodic_q IS NOT NULL');
-  else if (filter.lock !== null) add("(o.synodic_p || ':' || o.synodic_q) = ?", filter.lock);
+  const f = filter;
+  if (f.sys !== undefined) add('f.system_id = ?', f.sys);
+  if (f.fam !== undefined) add('o.family_id = ?', f.fam);
+  if (f.sig !== undefined) add('o.signature = ?', f.sig);
+  if (f.cmin !== undefined) add('o.jacobi >= ?', f.cmin);
+  if (f.cmax !== undefined) add('o.jacobi <= ?', f.cmax);
+  if (f.pmin !== undefined) add('o.period_days >= ?', f.pmin);
+  if (f.pmax !== undefined) add('o.period_days <= ?', f.pmax);
+  if (f.stable === true) add('o.stable = 1');
+  if (f.nu !== undefined) add('abs(o.stability_index) <= ?', f.nu);
+  if (f.vert === 'stable') add('abs(o.vertical_stability_index) < 1');
+  if (f.vert === 'unstable') add('abs(o.vertical_stability_index) >= 1');
+  if (f.a1min !== undefined) add('o.primary_min_alt_km >= ?', f.a1min);
+  if (f.a1max !== undefined) add('o.primary_min_alt_km <= ?', f.a1max);
+  if (f.a2min !== undefined) add('o.secondary_min_alt_km >= ?', f.a2min);
+  if (f.a2max !== undefined) add('o.secondary_min_alt_km <= ?', f.a2max);
+  if (f.lock === 'any') add('o.synodic_p IS NOT NULL AND o.synodic_q IS NOT NULL');
+  else if (f.lock !== undefined) add("(o.synodic_p || ':' || o.synodic_q) = ?", f.lock);
   // Screening bounds: an unscreened orbit has NULL there, and NULL >= x is not true, so it drops out.
-  if (filter.holdKmMin !== null) add('h.hold_radius_km >= ?', filter.holdKmMin);
-  if (filter.sunFractionMin !== null) add('sb.surviving_fraction >= ?', filter.sunFractionMin);
-  if (filter.eccFractionMin !== null) add('se.surviving_fraction >= ?', filter.eccFractionMin);
+  if (f.hmin !== undefined) add('h.hold_radius_km >= ?', f.hmin);
+  if (f.sunmin !== undefined) add('sb.surviving_fraction >= ?', f.sunmin);
+  if (f.eccmin !== undefined) add('se.surviving_fraction >= ?', f.eccmin);
   const joins = [
     'JOIN families f ON f.id = o.family_id',
     'LEFT JOIN hold_radii h ON h.orbit_id = o.id',

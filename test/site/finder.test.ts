@@ -17,6 +17,7 @@ import { writeSiteTestCatalog } from './site-test-catalog.ts';
 let dir: string;
 let db: Database.Database;
 let table: FinderTable;
+let ids: string[];
 
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'finder-test-'));
@@ -24,6 +25,8 @@ beforeAll(() => {
   writeSiteTestCatalog(path, { orbitCount: 300, familyCount: 5 });
   // Through JSON text, as the browser gets it.
   table = decodeFinderData(JSON.parse(JSON.stringify(finderData(readCatalogSnapshot(path)))));
+  const orbitIds = table.texts.orbitId!;
+  ids = Array.from(orbitIds.codes, (code) => orbitIds.dict[code]!);
   db = new Database(path, { readonly: true });
 });
 afterAll(() => {
@@ -34,7 +37,7 @@ afterAll(() => {
 function finderIds(filter: FinderFilter): string[] {
   const hits = new Int32Array(table.n);
   const count = filterRows(table, filter, sortOrder(table, 'orbit', 'asc'), hits);
-  return Array.from(hits.subarray(0, count), (i) => table.ids[i]);
+  return Array.from(hits.subarray(0, count), (i) => ids[i]!);
 }
 
 function sqlIds(filter: FinderFilter): string[] {
@@ -42,27 +45,27 @@ function sqlIds(filter: FinderFilter): string[] {
   return (db.prepare(sql).all(...params) as Array<{ id: string }>).map((r) => r.id);
 }
 
-const cases: Array<[string, Partial<FinderFilter>]> = [
+const cases: Array<[string, FinderFilter]> = [
   ['no filter', {}],
-  ['system', { system: 'earth-moon' }],
-  ['family', { family: 'earth-moon/E2M1/a' }],
-  ['signature', { signature: 'E3M1' }],
-  ['Jacobi range', { jacobiMin: 3.05, jacobiMax: 3.12 }],
-  ['period range', { periodDaysMin: 25, periodDaysMax: 40 }],
-  ['stable only', { stableOnly: true }],
-  ['|ν| bound', { nuAbsMax: 0.5 }],
-  ['vertical stable', { vertical: 'stable' }],
-  ['vertical unstable', { vertical: 'unstable' }],
-  ['altitudes', { primaryAltKmMin: 20_000, primaryAltKmMax: 60_000, secondaryAltKmMin: 1_000, secondaryAltKmMax: 15_000 }],
+  ['system', { sys: 'earth-moon' }],
+  ['family', { fam: 'earth-moon/E2M1/a' }],
+  ['signature', { sig: 'E3M1' }],
+  ['Jacobi range', { cmin: 3.05, cmax: 3.12 }],
+  ['period range', { pmin: 25, pmax: 40 }],
+  ['stable only', { stable: true }],
+  ['|ν| bound', { nu: 0.5 }],
+  ['vertical stable', { vert: 'stable' }],
+  ['vertical unstable', { vert: 'unstable' }],
+  ['altitudes', { a1min: 20_000, a1max: 60_000, a2min: 1_000, a2max: 15_000 }],
   ['has a lock', { lock: 'any' }],
   ['lock 1:1', { lock: '1:1' }],
-  ['combined', { system: 'earth-moon', stableOnly: true, jacobiMin: 3.03, secondaryAltKmMax: 20_000, vertical: 'stable' }],
-  ['unknown family', { family: 'no/such/family' }],
-  ['hold radius at least 300 km', { holdKmMin: 300 }],
-  ['hold radius at least 0 km (screened members only)', { holdKmMin: 0 }],
-  ['Sun survival at least 0.5', { sunFractionMin: 0.5 }],
-  ['eccentricity survival at least 0.6', { eccFractionMin: 0.6 }],
-  ['hold radius, both survivals and a family', { family: 'earth-moon/E2M1/a', holdKmMin: 100, sunFractionMin: 0.25, eccFractionMin: 0.25 }],
+  ['combined', { sys: 'earth-moon', stable: true, cmin: 3.03, a2max: 20_000, vert: 'stable' }],
+  ['unknown family', { fam: 'no/such/family' }],
+  ['hold radius at least 300 km', { hmin: 300 }],
+  ['hold radius at least 0 km (screened members only)', { hmin: 0 }],
+  ['Sun survival at least 0.5', { sunmin: 0.5 }],
+  ['eccentricity survival at least 0.6', { eccmin: 0.6 }],
+  ['hold radius, both survivals and a family', { fam: 'earth-moon/E2M1/a', hmin: 100, sunmin: 0.25, eccmin: 0.25 }],
 ];
 
 describe('finder filter against SQLite', () => {
@@ -78,22 +81,23 @@ describe('finder filter against SQLite', () => {
     expect(total).toBe(301);
     expect(counts.filter((c) => c > 0 && c < total).length).toBeGreaterThanOrEqual(14);
     // the screening bounds keep some screened members and drop others (SYNTHETIC screenings)
-    const screened = sqlIds({ ...EMPTY_FILTER, holdKmMin: 0 }).length;
-    for (const partial of [{ holdKmMin: 300 }, { sunFractionMin: 0.5 }, { eccFractionMin: 0.6 }]) {
+    const screened = sqlIds({ ...EMPTY_FILTER, hmin: 0 }).length;
+    for (const partial of [{ hmin: 300 }, { sunmin: 0.5 }, { eccmin: 0.6 }] as FinderFilter[]) {
       const n = sqlIds({ ...EMPTY_FILTER, ...partial }).length;
       expect(n).toBeGreaterThan(0);
       expect(n).toBeLessThan(screened);
     }
-    expect(screened).toBeLessThan(sqlIds({ ...EMPTY_FILTER, stableOnly: true }).length);
+    expect(screened).toBeLessThan(sqlIds({ ...EMPTY_FILTER, stable: true }).length);
   });
 
   it('sorting by hold radius keeps unscreened orbits last in both directions', () => {
     for (const direction of ['asc', 'desc'] as const) {
-      const order = Array.from(sortOrder(table, 'holdKm', direction));
-      const firstUnscreened = order.findIndex((i) => Number.isNaN(table.holdKm[i]));
+      const hold = table.numbers.holdRadiusKm!;
+      const order = Array.from(sortOrder(table, 'holdRadiusKm', direction));
+      const firstUnscreened = order.findIndex((i) => Number.isNaN(hold[i]!));
       expect(firstUnscreened).toBeGreaterThan(0);
-      expect(order.slice(firstUnscreened).every((i) => Number.isNaN(table.holdKm[i]))).toBe(true);
-      const values = order.slice(0, firstUnscreened).map((i) => table.holdKm[i]);
+      expect(order.slice(firstUnscreened).every((i) => Number.isNaN(hold[i]!))).toBe(true);
+      const values = order.slice(0, firstUnscreened).map((i) => hold[i]!);
       expect(values).toEqual([...values].sort((a, b) => (direction === 'asc' ? a - b : b - a)));
     }
   });
@@ -103,13 +107,13 @@ describe('finder filter against SQLite', () => {
       FROM orbits o LEFT JOIN hold_radii h ON h.orbit_id = o.id
       LEFT JOIN model_screenings sb ON sb.orbit_id = o.id AND sb.model = 'bicircular'
       LEFT JOIN model_screenings se ON se.orbit_id = o.id AND se.model = 'elliptic'`).all() as Array<{ id: string; hold: number | null; sun: number | null; ecc: number | null }>;
-    const index = new Map(table.ids.map((id, i) => [id, i]));
+    const index = new Map(ids.map((id, i) => [id, i]));
     const orNaN = (v: number | null) => (v === null ? NaN : v);
     for (const row of rows) {
       const i = index.get(row.id)!;
-      expect(table.holdKm[i]).toBe(orNaN(row.hold));
-      expect(table.sun[i]).toBe(orNaN(row.sun));
-      expect(table.ecc[i]).toBe(orNaN(row.ecc));
+      expect(table.numbers.holdRadiusKm![i]).toBe(orNaN(row.hold));
+      expect(table.numbers.sunSurvivingFraction![i]).toBe(orNaN(row.sun));
+      expect(table.numbers.eccentricitySurvivingFraction![i]).toBe(orNaN(row.ecc));
     }
   });
 
@@ -117,18 +121,19 @@ describe('finder filter against SQLite', () => {
     const order = sortOrder(table, 'jacobi', 'desc');
     const hits = new Int32Array(table.n);
     const count = filterRows(table, EMPTY_FILTER, order, hits);
-    const values = Array.from(hits.subarray(0, count), (i) => table.jacobi[i]);
+    const values = Array.from(hits.subarray(0, count), (i) => table.numbers.jacobi![i]!);
     expect(values).toEqual([...values].sort((a, b) => b - a));
   });
   it('sorting by synodic lock keeps orbits without a lock last in both directions', () => {
     for (const direction of ['asc', 'desc'] as const) {
-      const order = Array.from(sortOrder(table, 'lock', direction));
-      const firstLockless = order.findIndex((i) => table.lock[i] < 0);
+      const lock = table.texts.synodicLock!;
+      const order = Array.from(sortOrder(table, 'synodicLock', direction));
+      const firstLockless = order.findIndex((i) => lock.codes[i]! < 0);
       expect(firstLockless).toBeGreaterThan(0);
-      expect(order.slice(firstLockless).every((i) => table.lock[i] < 0)).toBe(true);
+      expect(order.slice(firstLockless).every((i) => lock.codes[i]! < 0)).toBe(true);
       const ratios = order.slice(0, firstLockless).map((i) => {
-        const [p, q] = table.meta.locks[table.lock[i]].split(':').map(Number);
-        return p / q;
+        const [p, q] = lock.dict[lock.codes[i]!]!.split(':').map(Number); // p:q read as p / q (the lock's meaning)
+        return p! / q!;
       });
       expect(ratios).toEqual([...ratios].sort((a, b) => (direction === 'asc' ? a - b : b - a)));
     }
@@ -139,12 +144,12 @@ describe('finder URL state', () => {
   it('round-trips every field', () => {
     const state: FinderState = {
       filter: {
-        system: 'earth-moon', family: 'a/b "c" & d', signature: 'E2M1', jacobiMin: 3.01, jacobiMax: 3.2, periodDaysMin: 10,
-        periodDaysMax: 60.5, stableOnly: true, nuAbsMax: 1e3, vertical: 'unstable', primaryAltKmMin: 0, primaryAltKmMax: 1e5,
-        secondaryAltKmMin: 100, secondaryAltKmMax: 2e4, lock: '3:2', holdKmMin: 250.5, sunFractionMin: 0.75,
-        eccFractionMin: 0.125,
+        sys: 'earth-moon', fam: 'a/b "c" & d', sig: 'E2M1', cmin: 3.01, cmax: 3.2, pmin: 10,
+        pmax: 60.5, stable: true, nu: 1e3, vert: 'unstable', a1min: 0, a1max: 1e5,
+        a2min: 100, a2max: 2e4, lock: '3:2', hmin: 250.5, sunmin: 0.75,
+        eccmin: 0.125,
       },
-      sort: 'nu',
+      sort: 'stabilityIndex',
       direction: 'desc',
       page: 3,
     };
@@ -154,9 +159,9 @@ describe('finder URL state', () => {
 
   it('ignores malformed numbers instead of filtering on NaN', () => {
     const state = queryToState('cmin=abc&cmax=&pmax=12&sort=bogus');
-    expect(state.filter.jacobiMin).toBeNull();
-    expect(state.filter.jacobiMax).toBeNull();
-    expect(state.filter.periodDaysMax).toBe(12);
+    expect(state.filter.cmin).toBeUndefined();
+    expect(state.filter.cmax).toBeUndefined();
+    expect(state.filter.pmax).toBe(12);
     expect(state.sort).toBe('orbit');
   });
 });

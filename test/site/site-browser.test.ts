@@ -100,9 +100,10 @@ describe('built site in chromium', () => {
       expect(expected.length).toBeLessThan(41);
       expect(await page.locator('#finder-count').getAttribute('data-count')).toBe(String(expected.length));
       const json = JSON.parse(await downloadText(page, () => page.click('#finder-json')));
-      expect(json.orbits.map((o: { id: string }) => o.id)).toEqual(expected);
+      expect(json.orbits.map((o: { orbitId: string }) => o.orbitId)).toEqual(expected);
       const csv = (await downloadText(page, () => page.click('#finder-csv'))).trim().split('\r\n');
-      expect(csv.slice(1).map((line) => line.split(',')[0])).toEqual(expected);
+      const idColumn = csv[0].split(',').indexOf('orbitId');
+      expect(csv.slice(1).map((line) => line.split(',')[idColumn])).toEqual(expected);
       // the visible rows are the first ones of the same set
       const shown = await page.locator('#finder-rows tr').evaluateAll((rows) => rows.map((r) => (r as HTMLElement).dataset.id));
       expect(shown).toEqual(expected.slice(0, shown.length));
@@ -298,20 +299,20 @@ describe('built site in chromium', () => {
       const csv = (await downloadText(page, () => page.click('#finder-csv'))).trim().split('\r\n');
       const header = csv[0].split(',');
       const col = (name: string) => header.indexOf(name);
-      expect(col('hold_radius_km')).toBeGreaterThan(0);
+      expect(col('holdRadiusKm')).toBeGreaterThan(0);
       const stored = db.prepare(`SELECT h.hold_radius_km AS hold, sb.surviving_fraction AS sun, se.surviving_fraction AS ecc FROM orbits o
         LEFT JOIN hold_radii h ON h.orbit_id = o.id LEFT JOIN model_screenings sb ON sb.orbit_id = o.id AND sb.model = 'bicircular'
         LEFT JOIN model_screenings se ON se.orbit_id = o.id AND se.model = 'elliptic' WHERE o.id = ?`);
       const text = (v: number | null) => (v === null ? '' : String(v));
       for (const line of csv.slice(1)) {
         const cells = line.split(',');
-        const dbRow = stored.get(cells[0]) as { hold: number | null; sun: number | null; ecc: number | null };
-        expect(cells[col('hold_radius_km')]).toBe(text(dbRow.hold));
-        expect(cells[col('sun_surviving_fraction')]).toBe(text(dbRow.sun));
-        expect(cells[col('eccentricity_surviving_fraction')]).toBe(text(dbRow.ecc));
+        const dbRow = stored.get(cells[col('orbitId')]) as { hold: number | null; sun: number | null; ecc: number | null };
+        expect(cells[col('holdRadiusKm')]).toBe(text(dbRow.hold));
+        expect(cells[col('sunSurvivingFraction')]).toBe(text(dbRow.sun));
+        expect(cells[col('eccentricitySurvivingFraction')]).toBe(text(dbRow.ecc));
       }
       const json = JSON.parse(await downloadText(page, () => page.click('#finder-json')));
-      expect(json.orbits.map((o: { id: string }) => o.id)).toEqual(expected);
+      expect(json.orbits.map((o: { orbitId: string }) => o.orbitId)).toEqual(expected);
       expect(json.orbits.every((o: { holdRadiusKm: number }) => o.holdRadiusKm >= 300)).toBe(true);
 
       // typing an eccentricity bound narrows at once and the URL keeps it (pass times: bench/site-build.ts)

@@ -1,28 +1,15 @@
 // Browser side of the orbit finder: loads the column file, keeps the form, the URL and the table in step,
 // renders only the current page of rows, and saves the filtered set as CSV or JSON.
-import { formatFixed, formatSig } from '../../lib/format-number.ts';
-import { idToPath } from '../../lib/id-path.ts';
 import type { FinderDataFile } from './finder-data-types.ts';
 import { rowsToCsv, rowsToJson } from './finder-export.ts';
 import { filterRows } from './finder-filter.ts';
 import { DEFAULT_STATE, queryToState, stateToQuery, type FinderState } from './finder-query.ts';
-import { isSortKey, sortOrder, type SortKey } from './finder-sort.ts';
-import { decodeFinderData, type FinderTable } from './finder-table.ts';
+import { finderRowHtml } from './finder-row.ts';
+import { isSortKey, sortOrder } from './finder-sort.ts';
+import { decodeFinderData, rowValues, type FinderTable } from './finder-table.ts';
 import { saveTextFile } from '../save-text-file.ts';
 
 const PAGE_SIZE = 50;
-
-/** A surviving fraction as a whole percent; a dash for an unscreened orbit (NaN). */
-export function formatPercent(fraction: number): string {
-  return Number.isNaN(fraction) ? '—' : `${formatFixed(fraction * 100, 0)} %`;
-}
-
-function el<K extends keyof HTMLElementTagNameMap>(tag: K, text?: string, className?: string): HTMLElementTagNameMap[K] {
-  const node = document.createElement(tag);
-  if (text !== undefined) node.textContent = text;
-  if (className) node.className = className;
-  return node;
-}
 
 export async function startFinder(root: HTMLElement): Promise<void> {
   const form = root.querySelector<HTMLFormElement>('#finder-form')!;
@@ -72,42 +59,14 @@ export async function startFinder(root: HTMLElement): Promise<void> {
     return { ...parsed, sort: state.sort, direction: state.direction, page: 0 };
   };
 
-  const familyName = (i: number) => table.meta.families[table.family[i]]?.name ?? '';
   const renderRows = () => {
     const pages = Math.max(1, Math.ceil(hitCount / PAGE_SIZE));
     state.page = Math.min(state.page, pages - 1);
     const from = state.page * PAGE_SIZE;
     const to = Math.min(hitCount, from + PAGE_SIZE);
-    const fragment = document.createDocumentFragment();
-    for (let k = from; k < to; k++) {
-      const i = hits[k];
-      const tr = el('tr');
-      tr.dataset.id = table.ids[i];
-      const link = el('a', `${familyName(i)} #${table.seq[i]}`);
-      link.href = `${base}orbit/${idToPath(table.ids[i])}/`;
-      const first = el('td');
-      first.append(link);
-      const system = table.meta.systems[table.familySystem[table.family[i]]];
-      const lock = table.lock[i] < 0 ? '—' : table.meta.locks[table.lock[i]];
-      tr.append(
-        first,
-        el('td', system?.name ?? '', 'nowrap'),
-        el('td', table.meta.signatures[table.signature[i]], 'mono'),
-        el('td', formatSig(table.jacobi[i], 9), 'r num'),
-        el('td', formatFixed(table.periodDays[i], 3), 'r num'),
-        el('td', formatSig(table.nu[i], 5), 'r num'),
-        el('td', formatSig(table.nuV[i], 5), 'r num'),
-        el('td', formatFixed(table.primaryAltKm[i], 0), 'r num'),
-        el('td', formatFixed(table.secondaryAltKm[i], 0), 'r num'),
-        el('td', lock, 'r num'),
-        el('td', table.stable[i] ? 'stable' : 'unstable', table.stable[i] ? 'tag-cell stable' : 'tag-cell unstable'),
-        el('td', formatFixed(table.holdKm[i], 1), 'r num'),
-        el('td', formatPercent(table.sun[i]), 'r num'),
-        el('td', formatPercent(table.ecc[i]), 'r num'),
-      );
-      fragment.append(tr);
-    }
-    tbody.replaceChildren(fragment);
+    let html = '';
+    for (let k = from; k < to; k++) html += finderRowHtml(rowValues(table, hits[k]!), base);
+    tbody.innerHTML = html;
     pageOut.textContent = `page ${state.page + 1} of ${pages}`;
     prev.disabled = state.page === 0;
     next.disabled = state.page >= pages - 1;
@@ -153,7 +112,7 @@ export async function startFinder(root: HTMLElement): Promise<void> {
       const key = button.dataset.sort ?? '';
       if (!isSortKey(key)) return;
       state.direction = state.sort === key && state.direction === 'asc' ? 'desc' : 'asc';
-      state.sort = key as SortKey;
+      state.sort = key;
       state.page = 0;
       order = sortOrder(table, state.sort, state.direction);
       markSort();

@@ -1,37 +1,41 @@
-// Finder state ⇄ URL query, so a filtered view can be shared and bookmarked. Short, stable parameter names.
-import { EMPTY_FILTER, type FinderFilter, type VerticalFilter } from './finder-filter.ts';
-import { isSortKey, type SortDirection, type SortKey } from './finder-sort.ts';
+// Finder state ⇄ URL query, so a filtered view can be shared and bookmarked. The parameter names are the
+// URL keys of the orbit-field table's filters, plus sort, dir and page.
+import { FINDER_FIELDS } from '../../../catalog-db/orbit-fields.ts';
+import type { FieldFilter } from '../../../catalog-db/orbit-field-types.ts';
+import type { FinderFilter } from './finder-filter.ts';
+import { isSortKey, type SortDirection } from './finder-sort.ts';
 
 export interface FinderState {
   filter: FinderFilter;
-  sort: SortKey;
+  /** A sortable field's key. */
+  sort: string;
   direction: SortDirection;
   page: number; // 0-based
 }
 
-export const DEFAULT_STATE: FinderState = { filter: EMPTY_FILTER, sort: 'orbit', direction: 'asc', page: 0 };
+export const DEFAULT_STATE: FinderState = { filter: {}, sort: 'orbit', direction: 'asc', page: 0 };
 
-const NUMBER_PARAMS = {
-  cmin: 'jacobiMin', cmax: 'jacobiMax', pmin: 'periodDaysMin', pmax: 'periodDaysMax', nu: 'nuAbsMax',
-  a1min: 'primaryAltKmMin', a1max: 'primaryAltKmMax', a2min: 'secondaryAltKmMin', a2max: 'secondaryAltKmMax',
-  hmin: 'holdKmMin', sunmin: 'sunFractionMin', eccmin: 'eccFractionMin',
-} as const satisfies Record<string, keyof FinderFilter>;
-
-const TEXT_PARAMS = { sys: 'system', fam: 'family', sig: 'signature', lock: 'lock' } as const satisfies Record<string, keyof FinderFilter>;
+/** Every URL key with what it holds, in table order. */
+function urlKeys(): Array<[string, 'number' | 'text' | 'flag']> {
+  const keys: Array<[string, 'number' | 'text' | 'flag']> = [];
+  const add = (spec: FieldFilter) => {
+    if (spec.kind === 'range') {
+      if (spec.minKey !== undefined) keys.push([spec.minKey, 'number']);
+      if (spec.maxKey !== undefined) keys.push([spec.maxKey, 'number']);
+    } else keys.push([spec.key, spec.kind === 'absMax' ? 'number' : spec.kind === 'flag' ? 'flag' : 'text']);
+  };
+  for (const field of FINDER_FIELDS) if (field.filter !== null) add(field.filter);
+  return keys;
+}
+const URL_KEYS = urlKeys();
 
 export function stateToQuery(state: FinderState): string {
   const q = new URLSearchParams();
-  const f = state.filter;
-  for (const [param, field] of Object.entries(TEXT_PARAMS)) {
-    const v = f[field];
-    if (v !== null) q.set(param, v);
+  for (const [key, kind] of URL_KEYS) {
+    const v = state.filter[key];
+    if (v === undefined || v === false) continue;
+    q.set(key, kind === 'flag' ? '1' : String(v));
   }
-  for (const [param, field] of Object.entries(NUMBER_PARAMS)) {
-    const v = f[field];
-    if (v !== null) q.set(param, String(v));
-  }
-  if (f.stableOnly) q.set('stable', '1');
-  if (f.vertical !== 'any') q.set('vert', f.vertical);
   if (state.sort !== DEFAULT_STATE.sort || state.direction !== DEFAULT_STATE.direction) {
     q.set('sort', state.sort);
     q.set('dir', state.direction);
@@ -43,19 +47,15 @@ export function stateToQuery(state: FinderState): string {
 /** Reads a query; unknown or malformed values fall back to "no bound" rather than failing the page. */
 export function queryToState(search: string): FinderState {
   const q = new URLSearchParams(search);
-  const filter: FinderFilter = { ...EMPTY_FILTER };
-  for (const [param, field] of Object.entries(TEXT_PARAMS)) {
-    const v = q.get(param);
-    if (v !== null && v !== '') filter[field] = v;
+  const filter: FinderFilter = {};
+  for (const [key, kind] of URL_KEYS) {
+    const raw = q.get(key);
+    if (raw === null || raw.trim() === '') continue;
+    if (kind === 'flag') {
+      if (raw === '1') filter[key] = true;
+    } else if (kind === 'text') filter[key] = raw;
+    else if (Number.isFinite(Number(raw))) filter[key] = Number(raw);
   }
-  for (const [param, field] of Object.entries(NUMBER_PARAMS)) {
-    const raw = q.get(param);
-    const v = raw === null || raw.trim() === '' ? NaN : Number(raw);
-    if (Number.isFinite(v)) filter[field] = v;
-  }
-  filter.stableOnly = q.get('stable') === '1';
-  const vert = q.get('vert');
-  filter.vertical = vert === 'stable' || vert === 'unstable' ? (vert as VerticalFilter) : 'any';
   const sort = q.get('sort') ?? '';
   const page = Number(q.get('page'));
   return {

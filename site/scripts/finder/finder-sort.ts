@@ -1,55 +1,37 @@
-// Row orders for the finder's sortable columns (a permutation, recomputed only when the sort changes).
+// Row orders for the finder's sortable columns (a permutation, recomputed only when the sort changes), as
+// the orbit-field table says: by value (text by its sorted code), or by catalog order. Rows without a
+// value (not screened, no synodic lock) stay last in both directions.
+import { FINDER_COLUMNS } from '../../../catalog-db/orbit-fields.ts';
 import type { FinderTable } from './finder-table.ts';
 
-export const SORT_KEYS = [
-  'orbit', 'signature', 'jacobi', 'periodDays', 'nu', 'nuV', 'primaryAltKm', 'secondaryAltKm', 'lock', 'holdKm', 'sun', 'ecc',
-] as const;
-export type SortKey = (typeof SORT_KEYS)[number];
 export type SortDirection = 'asc' | 'desc';
 
-export function isSortKey(value: string): value is SortKey {
-  return (SORT_KEYS as readonly string[]).includes(value);
+export function isSortKey(value: string): boolean {
+  return FINDER_COLUMNS.some((field) => field.key === value && field.sort !== null);
 }
 
-function compareBy(table: FinderTable, key: SortKey): (a: number, b: number) => number {
-  switch (key) {
-    case 'orbit':
-      return (a, b) => a - b; // the catalog's own order: family, then position along it
-    case 'signature': {
-      const names = table.meta.signatures;
-      return (a, b) => names[table.signature[a]].localeCompare(names[table.signature[b]]) || a - b;
-    }
-    case 'lock': {
-      // by the ratio p/q; orbits without a lock last
-      const ratio = table.meta.locks.map((l) => {
-        const [p, q] = l.split(':').map(Number);
-        return p / q;
-      });
-      const value = (i: number) => (table.lock[i] < 0 ? Infinity : ratio[table.lock[i]]);
-      return (a, b) => value(a) - value(b) || a - b;
-    }
-    case 'holdKm':
-    case 'sun':
-    case 'ecc': {
-      // unscreened orbits (NaN) after every screened one
-      const column = table[key];
-      const value = (i: number) => (Number.isNaN(column[i]) ? Infinity : column[i]);
-      return (a, b) => value(a) - value(b) || a - b;
-    }
-    default: {
-      const column = table[key];
-      return (a, b) => column[a] - column[b] || a - b;
-    }
+/** The sort value of each row; NaN for a row without a value. */
+function sortValues(table: FinderTable, key: string): (i: number) => number {
+  const field = FINDER_COLUMNS.find((f) => f.key === key);
+  if (field === undefined || field.sort === null) throw new RangeError(`sort: "${key}" is not a sortable column`);
+  if (field.sort === 'catalog') return (i) => i;
+  if (field.type === 'text') {
+    const codes = table.texts[key]!.codes;
+    return (i) => (codes[i]! < 0 ? NaN : codes[i]!);
   }
+  const column = table.numbers[key]!;
+  return (i) => column[i]!;
 }
 
-export function sortOrder(table: FinderTable, key: SortKey, direction: SortDirection): Int32Array {
+export function sortOrder(table: FinderTable, key: string, direction: SortDirection): Int32Array {
+  const value = sortValues(table, key);
+  const sign = direction === 'asc' ? 1 : -1;
   const order = Array.from({ length: table.n }, (_, i) => i);
-  const compare = compareBy(table, key);
-  // Descending reverses the values; orbits without a synodic lock (or not screened) stay last either way.
-  const screened = key === 'holdKm' || key === 'sun' || key === 'ecc';
-  const lockless = (i: number) =>
-    (key === 'lock' && table.lock[i] < 0) || (screened && Number.isNaN(table[key as 'holdKm' | 'sun' | 'ecc'][i])) ? 1 : 0;
-  order.sort(direction === 'asc' ? compare : (a, b) => lockless(a) - lockless(b) || compare(b, a));
+  order.sort((a, b) => {
+    const va = value(a), vb = value(b);
+    const missing = Number(Number.isNaN(va)) - Number(Number.isNaN(vb));
+    if (missing !== 0) return missing;
+    return (Number.isNaN(va) ? 0 : sign * (va - vb)) || a - b;
+  });
   return Int32Array.from(order);
 }
