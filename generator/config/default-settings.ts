@@ -24,14 +24,15 @@ export interface SearchSettings {
 }
 
 /**
- * Discovery grid: 300 start points per segment and 64 levels from the lowest C of the family limits up
+ * Discovery grid: crossing counts up to 8 (the half period of an E3M3 cycler crosses y = 0 up to 8 times),
+ * 300 start points per segment and 64 levels from the lowest C of the family limits up
  * to 1e-5 below C(L1). Doubling either (128 × 300, 64 × 600) finds the same Earth–Moon families of every
  * signature E1M1…E3M3 (bench/discovery-convergence.ts); the grid costs about 20 s per system on 2 cores.
  */
 export const DEFAULT_SEARCH: SearchSettings = {
   segments: [...ALL_SEGMENTS],
   directions: [1, -1],
-  maxHalfCrossings: 6,
+  maxHalfCrossings: 8,
   gridPoints: 300,
   jacobiLevels: 64,
   jacobiGapBelowL1: 1e-5,

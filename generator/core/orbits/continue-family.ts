@@ -18,6 +18,9 @@ export type EndReason =
  */
 export const PRECISION_LIMIT_INDEX = 5e9;
 
+/** |ẏ0| below this (≈ 1 m/s in Earth–Moon units) is a start on the zero-velocity curve: a brake orbit. */
+export const BRAKE_SPEED_ND = 1e-3;
+
 export interface ContinuationRules {
   maxMembers: number;
   jacobiMin: number;
@@ -70,7 +73,7 @@ function endReasonOf(member: FamilyMember, direction: number, rules: Continuatio
   // ẏ0 through zero: the start reached the zero-velocity curve (a brake orbit); past it the orbits
   // start the other way round and form another family.
   // (Reference families shrink to their equilibrium there instead: not checked for them.)
-  if (rules.laps && member.vy0 * direction <= 0) return 'brake-orbit';
+  if (rules.laps && (member.vy0 * direction <= 0 || Math.abs(member.vy0) < BRAKE_SPEED_ND)) return 'brake-orbit';
   if (a.primaryMinDistanceNd < rules.primaryRadiusNd) return 'collision-primary';
   if (a.secondaryMinDistanceNd < rules.secondaryRadiusNd) return 'collision-secondary';
   if (a.jacobi < rules.jacobiMin || a.jacobi > rules.jacobiMax) return 'jacobi-range';

@@ -1,0 +1,107 @@
+// Families are followed through folds of C and end only for reasons of their own. One E1M1 job on a
+// small discovery grid (far side of the Earth, ẏ < 0, four levels from C = 3.09 to 3.152) yields a
+// family that turns back in C at C ≈ 3.1512 with narrow stable windows at the fold, and families that
+// end at the Moon's surface, at brake orbits and at a change of lap signature.
+// Checks: the members on both sides of a fold are periodic (mirror theorem, Roy & Ovenden 1955: ẋ = 0
+// at T/2, checked with odex, an independent integrator on npm); a collision end's last member comes
+// within one continuation step of the body's radius (IAU mean lunar radius 1737.4 km, from memory); a
+// brake-orbit end's ẏ0 falls toward 0 (the start reaches the zero-velocity curve, Szebehely 1967, ch. 4);
+// a signature-change end's next member along the family (corrected one step further) has another signature.
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { FamilyBundle, OrbitRow } from '../../catalog-db/types.ts';
+import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
+import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
+import { BRAKE_SPEED_ND } from '../../generator/core/orbits/continue-family.ts';
+import { correctOnArc } from '../../generator/core/orbits/correct-on-arc.ts';
+import type { FamilyJob } from '../../generator/core/orbits/family-job.ts';
+import { formatSignature } from '../../generator/core/orbits/lap-signature.ts';
+import { EARTH_MOON, jobResult } from './helpers/earth-moon-jobs.ts';
+import { odexFlow } from './helpers/odex-flow.ts';
+
+const mu = EARTH_MOON.mu;
+const xL1 = lagrangePoints(mu)[0]!.x;
+const cL1 = lagrangePoints(mu)[0]!.jacobi;
+
+const FOLD_JOB: FamilyJob = {
+  key: 'test:E1M1-fold', name: 'E1M1 fold (test)', system: EARTH_MOON,
+  seed: {
+    // The half period of these orbits ends at the third crossing of y = 0 (beyond the Moon).
+    kind: 'lap-signature', signature: 'E1M1', segments: ['far-primary'], directions: [-1], maxHalfCrossings: 3, gridPoints: 300,
+    jacobiValues: [3.09, 3.12, 3.145, 3.152],
+  },
+  limits: { maxMembers: 2000, jacobiMin: 2.9, jacobiMax: cL1, maxPeriodNd: 40, unstableStop: null, initialStepNd: 1e-3, maxStepNd: 0.02 },
+  tolerance: { rtol: 1e-12, atol: 1e-12 }, indexTolerance: 1e-6,
+};
+
+const ends = (b: FamilyBundle) => [b.family.endReasonStart, b.family.endReasonEnd];
+
+/** The member at the end that stopped for `reason`, and its neighbour inside the family. */
+function endMembers(b: FamilyBundle, reason: string): [OrbitRow, OrbitRow] {
+  const o = b.orbits;
+  return b.family.endReasonEnd === reason ? [o[o.length - 1]!, o[o.length - 2]!] : [o[0]!, o[1]!];
+}
+
+describe('folds and natural ends (one small E1M1 job)', () => {
+  let bundles: FamilyBundle[];
+  beforeAll(() => {
+    bundles = jobResult(FOLD_JOB).bundles;
+  });
+
+  it('continues a family through a fold of C: both sides are periodic orbits', () => {
+    const folded = bundles.find((b) => {
+      const c = b.orbits.map((o) => o.jacobi);
+      return c.some((v, i) => i > 0 && i + 1 < c.length && (v - c[i - 1]!) * (c[i + 1]! - v) < 0);
+    });
+    expect(folded, bundles.map((b) => b.family.id).join(', ')).toBeDefined();
+    const c = folded!.orbits.map((o) => o.jacobi);
+    const top = c.indexOf(Math.max(...c));
+    expect(top).toBeGreaterThan(0);
+    expect(top).toBeLessThan(c.length - 1);
+    for (const o of [folded!.orbits[top - 1]!, folded!.orbits[top + 1]!, folded!.orbits[Math.max(0, top - 20)]!, folded!.orbits[Math.min(c.length - 1, top + 20)]!]) {
+      const half = odexFlow(mu, o.state0, o.period / 2, { tolerance: 1e-13 }).state;
+      expect(Math.abs(half[1]!), `${o.id}: y at T/2`).toBeLessThan(1e-7);
+      expect(Math.abs(half[3]!), `${o.id}: vx at T/2`).toBeLessThan(1e-6);
+    }
+  });
+
+  it('ends at a collision only within one step of the body\'s surface', () => {
+    const collided = bundles.filter((b) => ends(b).includes('collision-secondary'));
+    expect(collided.length).toBeGreaterThan(0);
+    for (const b of collided) {
+      const [last, previous] = endMembers(b, 'collision-secondary');
+      const stepKm = Math.abs(last.secondaryMinAltKm - previous.secondaryMinAltKm);
+      expect(last.secondaryMinAltKm, b.family.id).toBeGreaterThanOrEqual(0);
+      expect(last.secondaryMinAltKm, b.family.id).toBeLessThanOrEqual(Math.max(stepKm, 1));
+    }
+  });
+
+  it('ends at a brake orbit where ẏ0 falls toward zero', () => {
+    const braked = bundles.filter((b) => ends(b).includes('brake-orbit'));
+    expect(braked.length).toBeGreaterThan(0);
+    for (const b of braked) {
+      const [last, previous] = endMembers(b, 'brake-orbit');
+      expect(Math.abs(last.state0[4]!), b.family.id).toBeLessThan(20 * BRAKE_SPEED_ND);
+      expect(Math.abs(last.state0[4]!), b.family.id).toBeLessThan(Math.abs(previous.state0[4]!));
+    }
+  });
+
+  it('ends at a signature change where the next member along the family has another signature', () => {
+    const changed = bundles.filter((b) => ends(b).includes('signature-change'));
+    expect(changed.length).toBeGreaterThan(0);
+    const corrector = { rtol: 1e-12, atol: 1e-12, maxTimeNd: 40, residualTolerance: 2e-11, maxIterations: 12 };
+    for (const b of changed) {
+      const [last, previous] = endMembers(b, 'signature-change');
+      const dx = last.state0[0]! - previous.state0[0]!, dv = last.state0[4]! - previous.state0[4]!;
+      const length = Math.hypot(dx, dv);
+      // Along the secant beyond the end member, as far as the last step and a little less.
+      const signatures = [1, 0.5, 0.25].flatMap((f) => {
+        const next = correctOnArc(mu, 3, [last.state0[0]!, last.state0[4]!], [dx / length, dv / length], f * length, corrector);
+        if (!next) return [];
+        const a = analyseOrbit({ mu, xL1, rtol: 1e-12, atol: 1e-12 }, next.x0, next.vy0, 2 * next.shot.tHalfNd);
+        return [formatSignature('E', 'M', a.laps) + (a.l1Passages === 0 ? '/no-L1' : '')];
+      });
+      expect(signatures.length, b.family.id).toBeGreaterThan(0);
+      expect(signatures.some((s) => s !== 'E1M1'), `${b.family.id}: ${signatures.join(' ')}`).toBe(true);
+    }
+  });
+});
