@@ -46,6 +46,11 @@ export const ORBIT_FIELDS: readonly OrbitField[] = [
     filter: { kind: 'range', minKey: 'pmin', maxKey: 'pmax' }, sort: 'value', page: true, get: (s) => s.orbit.periodDays,
   }),
   field({
+    key: 'periodSynodicMonths', label: 'Period in synodic months', format: { style: 'fixed', digits: 4 }, catalogCsv: false, finder: 'column',
+    filter: { kind: 'range', minKey: 'smmin', maxKey: 'smmax' }, sort: 'value', page: true,
+    get: (s) => (s.system.synodicPeriodDays === null ? null : s.orbit.periodDays / s.system.synodicPeriodDays),
+  }),
+  field({
     key: 'stabilityIndex', label: 'In-plane index ν', format: { style: 'sig', digits: 10 }, finder: 'column', filter: { kind: 'absMax', key: 'nu' },
     sort: 'value', page: true, get: (s) => s.orbit.stabilityIndex,
   }),

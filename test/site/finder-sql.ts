@@ -17,6 +17,8 @@ export function finderSql(filter: FinderFilter): { sql: string; params: unknown[
   if (f.cmax !== undefined) add('o.jacobi <= ?', f.cmax);
   if (f.pmin !== undefined) add('o.period_days >= ?', f.pmin);
   if (f.pmax !== undefined) add('o.period_days <= ?', f.pmax);
+  if (f.smmin !== undefined) add('o.period_days / s.synodic_period_days >= ?', f.smmin);
+  if (f.smmax !== undefined) add('o.period_days / s.synodic_period_days <= ?', f.smmax);
   if (f.stable === true) add('o.stable = 1');
   if (f.nu !== undefined) add('abs(o.stability_index) <= ?', f.nu);
   if (f.vert === 'stable') add('abs(o.vertical_stability_index) < 1');
@@ -33,6 +35,7 @@ export function finderSql(filter: FinderFilter): { sql: string; params: unknown[
   if (f.eccmin !== undefined) add('se.surviving_fraction >= ?', f.eccmin);
   const joins = [
     'JOIN families f ON f.id = o.family_id',
+    'JOIN systems s ON s.id = f.system_id',
     'LEFT JOIN hold_radii h ON h.orbit_id = o.id',
     "LEFT JOIN model_screenings sb ON sb.orbit_id = o.id AND sb.model = 'bicircular'",
     "LEFT JOIN model_screenings se ON se.orbit_id = o.id AND se.model = 'elliptic'",
