@@ -18,10 +18,11 @@ const {
 import { SLOT_K1, SLOT_STAGE, SLOT_Y, SLOT_Y_NEW, type Dop853Workspace, type Rhs } from './workspace.ts';
 
 /**
- * Fills ws.yNew with the step from (t, ws.y) of size h, ws.k1 holding f(t, y) on entry.
- * Returns the scaled error norm: the step is accepted when it is ≤ 1.
+ * Fills ws.yNew with the step from (t, ws.y) of size h, ws.k1 holding f(t, y) on entry, and ws.errorNorm
+ * with the scaled error norm: the step is accepted when it is ≤ 1. (Stored, not returned: a returned double
+ * is boxed on the heap at every trial step.)
  */
-export function attemptStep(rhs: Rhs, ws: Dop853Workspace, t: number, h: number, rtol: number, atol: number): number {
+export function attemptStep(rhs: Rhs, ws: Dop853Workspace, t: number, h: number, rtol: number, atol: number): void {
   const n = ws.n;
   const b = ws.buffer;
   const s = ws.yStage;
@@ -86,5 +87,5 @@ export function attemptStep(rhs: Rhs, ws: Dop853Workspace, t: number, h: number,
   }
   let denominator = err5 + 0.01 * err3;
   if (denominator <= 0) denominator = 1;
-  return Math.abs(h) * err5 * Math.sqrt(1 / (n * denominator));
+  ws.errorNorm = Math.abs(h) * err5 * Math.sqrt(1 / (n * denominator));
 }

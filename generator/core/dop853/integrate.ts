@@ -44,6 +44,13 @@ const FAC_MIN_INV = 1 / 0.333; // largest shrink 1/0.333
 const FAC_MAX_INV = 1 / 6; // largest growth 6
 const UNIT_ROUNDOFF = 2.3e-16;
 
+// err^(1/8) / SAFETY: h / stepFactor is the step that would just meet the tolerance, times SAFETY.
+// Math.pow, not **: the same number, but a state export can swap in a portable pow so Node and a browser
+// take the same steps (core/state-export/portable-math.ts).
+function stepFactor(err: number): number {
+  return Math.pow(err, 0.125) / SAFETY;
+}
+
 /** Integrates y' = f(t, y) from (t0, y0) to tEnd. The final state is left in ws.y. */
 export function integrateDop853(
   rhs: Rhs, ws: Dop853Workspace, t0: number, y0: ArrayLike<number>, tEnd: number,
@@ -86,7 +93,8 @@ export function integrateDop853(
       h = tEnd - t;
       last = true;
     }
-    const err = attemptStep(rhs, ws, t, h, rtol, atol);
+    attemptStep(rhs, ws, t, h, rtol, atol);
+    const err = ws.errorNorm;
     nfcn += 11;
     if (!Number.isFinite(err)) {
       // A stage hit a singularity or overflowed: shrink hard and retry.
@@ -96,14 +104,11 @@ export function integrateDop853(
       rejections++;
       continue;
     }
-    // Math.pow, not **: the same number, but a state export can swap in a portable pow so Node and a browser
-    // take the same steps (core/state-export/portable-math.ts).
-    const fac11 = Math.pow(err, 0.125);
-    const fac = Math.max(FAC_MAX_INV, Math.min(FAC_MIN_INV, fac11 / SAFETY));
-    let hNew = h / fac;
     if (err <= 1) {
       accepted++;
       const tNew = last ? tEnd : t + h;
+      // f at the new point (FSAL) first: it does not depend on the next step size, so the CPU overlaps it
+      // with the slow root below.
       rhs(tNew, ws.yNew, ws.k13);
       nfcn++;
       if (dense) {
@@ -116,6 +121,7 @@ export function integrateDop853(
         buffer[oY + i] = buffer[oNew + i];
         buffer[o1 + i] = buffer[o13 + i];
       }
+      let hNew = h / Math.max(FAC_MAX_INV, Math.min(FAC_MIN_INV, stepFactor(err)));
       const tOld = t;
       t = tNew;
       if (observer) {
@@ -131,13 +137,13 @@ export function integrateDop853(
       if (Math.abs(hNew) > maxStep) hNew = direction * maxStep;
       if (rejected) hNew = direction * Math.min(Math.abs(hNew), Math.abs(h));
       rejected = false;
+      h = hNew;
     } else {
-      hNew = h / Math.min(FAC_MIN_INV, fac11 / SAFETY);
+      h /= Math.min(FAC_MIN_INV, stepFactor(err));
       rejected = true;
       last = false;
       if (accepted >= 1) rejections++;
     }
-    h = hNew;
   }
   result.tFinal = t;
   result.rhsEvaluations = nfcn;

@@ -41,6 +41,8 @@ export interface Dop853Workspace {
   readonly k16: Float64Array;
   /** Dense-output coefficients of the last accepted step, 8 blocks of n. */
   readonly cont: Float64Array;
+  /** Scaled error norm of the last trial step (≤ 1: accepted). */
+  errorNorm: number;
   /** Start time and size of the step the dense output describes. */
   denseT: number;
   denseH: number;
@@ -58,6 +60,7 @@ export function createDop853Workspace(n: number): Dop853Workspace {
     k1: k(1), k2: k(2), k3: k(3), k4: k(4), k5: k(5), k6: k(6), k7: k(7), k8: k(8),
     k9: k(9), k10: k(10), k11: k(11), k12: k(12), k13: k(13), k14: k(14), k15: k(15), k16: k(16),
     cont: v(SLOT_CONT, 8),
+    errorNorm: 0,
     denseT: 0,
     denseH: 0,
   };
