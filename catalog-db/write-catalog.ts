@@ -4,6 +4,7 @@ import type { Database } from 'better-sqlite3';
 import { prepareAuditStore } from './audit-store.ts';
 import { jobSettingsJson } from './job-settings.ts';
 import { prepareMetaStore } from './meta.ts';
+import { closeWritable } from './open-sqlite.ts';
 import { prepareReplaceFamily } from './replace-family.ts';
 import { runTable, systemTable } from './table-columns.ts';
 import type { CatalogWriter, JobWithSettings } from './types.ts';
@@ -91,7 +92,7 @@ export function createCatalogWriter(db: Database): CatalogWriter {
       return forgetTransaction.immediate(systemIds, jobKeys);
     },
     close() {
-      db.close();
+      closeWritable(db);
     },
   };
 }
