@@ -7,7 +7,7 @@ import type { OrbitField, OrbitFieldSource } from './orbit-field-types.ts';
 const STATE_NAMES = ['x0', 'y0', 'z0', 'vx0', 'vy0', 'vz0'] as const;
 
 /** p/q of a synodic lock written "p:q". */
-export function lockRatio(lock: string): number {
+function lockRatio(lock: string): number {
   const [p, q] = lock.split(':').map(Number);
   return p! / q!;
 }
@@ -107,12 +107,6 @@ export const ORBIT_FIELDS: readonly OrbitField[] = [
   // 1 or -1 on a vertically critical member (branch point of a spatial family), empty elsewhere.
   field({ key: 'verticalCriticalIndex', label: 'Vertical critical index', get: (s) => s.verticalCriticalIndex }),
 ];
-
-export function orbitField(key: string): OrbitField {
-  const found = ORBIT_FIELDS.find((f) => f.key === key);
-  if (!found) throw new Error(`no orbit field ${JSON.stringify(key)}`);
-  return found;
-}
 
 export const FINDER_FIELDS: readonly OrbitField[] = ORBIT_FIELDS.filter((f) => f.finder !== null);
 /** The finder's columns, in table order. */

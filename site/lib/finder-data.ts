@@ -3,7 +3,7 @@
 // selects in SQLite).
 import { FINDER_FIELDS } from '../../catalog-db/orbit-fields.ts';
 import type { FieldValue, OrbitFieldSource } from '../../catalog-db/orbit-field-types.ts';
-import { FINDER_DATA_VERSION, type FinderColumnData, type FinderDataFile } from '../scripts/finder/finder-data-types.ts';
+import { FINDER_DATA_VERSION, type FinderColumnData, type FinderDataFile } from './finder-data-types.ts';
 import type { CatalogSnapshot } from './catalog-source.ts';
 import { orbitFieldSource } from './orbit-field-source.ts';
 

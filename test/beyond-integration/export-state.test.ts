@@ -133,6 +133,7 @@ describe('export-state as CCSDS OEM (KVN)', () => {
   it('has the header keys, the META block and data lines of 7 fields', () => {
     const text = runExportState(flags({ format: 'oem', periods: '1', step: '2h' }), Date.parse('2026-05-01T12:00:00Z'));
     expect(/^[\x09\x0a\x20-\x7e]*$/.test(text)).toBe(true); // KVN is ASCII
+    expect(text).toContain("tolerance rtol 1e-12, atol 1e-14 (the catalog run's)"); // the run row's (makeRunInput), not a constant
     const oem = parseOem(text);
     expect(oem.firstLine).toBe('CCSDS_OEM_VERS = 3.0');
     expect(oem.header.get('CREATION_DATE')).toBe('2026-05-01T12:00:00.000000');

@@ -8,7 +8,7 @@ import { rotatingToInertialAtEpoch } from '../../generator/core/beyond/rotating-
 import { sampleTrajectoryAt } from '../../generator/core/propagation/sample-trajectory.ts';
 import { rotatingToBodyInertial } from '../../generator/core/state-export/body-inertial-frame.ts';
 import { parseEpochMicros } from '../../generator/core/state-export/epoch-text.ts';
-import { EXPORT_TOLERANCE, MAX_DATED_SAMPLES, stateSeries, type StateRequest } from '../../generator/core/state-export/state-series.ts';
+import { MAX_DATED_SAMPLES, stateSeries, type StateRequest } from '../../generator/core/state-export/state-series.ts';
 import { geocentricMoonAt, utDaysSinceJ2000 } from '../../generator/ephemeris/geocentric-moon.ts';
 import { ARENSTORF_ORBIT as orbit } from './arenstorf-export-orbit.ts';
 
@@ -88,7 +88,7 @@ describe('EME2000 frame', () => {
 
   it('maps each sample with the Moon of astronomy-engine at the epoch written (1e-6 km, 1e-9 km/s)', () => {
     expect(s.epochMicros[1]! - s.epochMicros[0]!).toBe(stepS * 1e6);
-    const rotating = sampleTrajectoryAt(orbit.mu, orbit.state0, s.timesNd, EXPORT_TOLERANCE).states; // the same propagator run
+    const rotating = sampleTrajectoryAt(orbit.mu, orbit.state0, s.timesNd, orbit.tolerance).states; // the same propagator run
     for (const i of [0, 7, s.count - 1]) {
       const ut = (s.epochMicros[i]! - Date.UTC(2000, 0, 1, 12) * 1000) / 86_400_000_000;
       const expected = rotatingToInertialAtEpoch(rotating.subarray(6 * i, 6 * i + 6), { mu: orbit.mu, ...moonFromLibrary(ut) });

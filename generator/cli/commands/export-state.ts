@@ -131,8 +131,9 @@ function readExportOrbit(dbPath: string, orbitId: string): ExportOrbit {
     if (orbit === undefined) throw new UsageError(`--orbit: "${orbitId}" is not in ${dbPath} (see the orbitId column of \`export --format csv\`)`);
     const family = reader.family(orbit.familyId);
     const system = family && reader.systems().find((s) => s.id === family.systemId);
-    if (family === undefined || system === undefined) throw new Error(`catalog ${dbPath}: orbit ${orbitId} has no family or system row`);
-    return exportOrbitOf({ orbit, family, system });
+    const run = family && reader.runs().find((r) => r.id === family.runId);
+    if (family === undefined || system === undefined || run === undefined) throw new Error(`catalog ${dbPath}: orbit ${orbitId} has no family, system or run row`);
+    return exportOrbitOf({ orbit, family, system, run });
   } finally {
     reader.close();
   }

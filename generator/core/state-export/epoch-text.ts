@@ -7,7 +7,7 @@
 const EPOCH_PATTERN = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.(\d{1,6}))?)?)?(Z|[+-]00:?00)?$/;
 const HINT = 'ISO 8601 in UTC, e.g. 2030-01-01T00:00:00Z';
 /** Cycler seeds outside this span are surely typos (the lunar theory is meant for a wider one). */
-export const EPOCH_YEARS = { min: 1900, max: 2100 } as const;
+const EPOCH_YEARS = { min: 1900, max: 2100 } as const;
 
 /** Microseconds since 1970 of an epoch written in UTC; a RangeError says what is wrong, quoting the text. */
 export function parseEpochMicros(text: string): number {

@@ -2,7 +2,7 @@
 // plain words, the approximation behind the numbers. The same sentences go into the OEM COMMENT lines,
 // the CSV "#" lines, the JSON "comments" and the orbit page's note (written in ASCII, as KVN wants).
 import { frameNames, type StateFrame } from './state-frames.ts';
-import { EXPORT_TOLERANCE, type StateSeries } from './state-series.ts';
+import type { StateSeries } from './state-series.ts';
 
 export interface ExportDescription {
   refFrame: string;
@@ -43,7 +43,7 @@ export function describeExport(series: StateSeries): ExportDescription {
   const span = request.span === null
     ? 'One state: the orbit\'s catalog start state at the start epoch.'
     : `Samples every ${request.span.stepS} s from the start epoch over ${request.span.periods} period(s), to the first at or past the end;`
-      + ` the generator's DOP853 with dense output, tolerance rtol ${EXPORT_TOLERANCE.rtol}, atol ${EXPORT_TOLERANCE.atol}.`;
+      + ` the generator's DOP853 with dense output, tolerance rtol ${orbit.tolerance.rtol}, atol ${orbit.tolerance.atol} (the catalog run's).`;
   return {
     refFrame: names.refFrame,
     centerName: names.centerName,

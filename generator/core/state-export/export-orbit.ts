@@ -17,6 +17,8 @@ export interface ExportOrbit {
   periodNd: number;
   /** Nondimensional rotating-frame start state x, y, z, vx, vy, vz. */
   state0: number[];
+  /** The integration tolerance of the catalog run that made the orbit (its provenance): the samples are as accurate as the orbit. */
+  tolerance: { rtol: number; atol: number };
 }
 
 /** The catalog rows' fields used here (structural, so the core needs no catalog-db import). */
@@ -24,9 +26,10 @@ export interface ExportOrbitRows {
   orbit: { id: string; seq: number; signature: string; period: number; state0: ArrayLike<number> };
   family: { id: string; name: string };
   system: { id: string; name: string; primaryName: string; secondaryName: string; mu: number; lengthUnitKm: number; timeUnitS: number };
+  run: { rtol: number; atol: number };
 }
 
-export function exportOrbitOf({ orbit, family, system }: ExportOrbitRows): ExportOrbit {
+export function exportOrbitOf({ orbit, family, system, run }: ExportOrbitRows): ExportOrbit {
   return {
     orbitId: orbit.id,
     seq: orbit.seq,
@@ -42,6 +45,7 @@ export function exportOrbitOf({ orbit, family, system }: ExportOrbitRows): Expor
     timeUnitS: system.timeUnitS,
     periodNd: orbit.period,
     state0: Array.from(orbit.state0),
+    tolerance: { rtol: run.rtol, atol: run.atol },
   };
 }
 

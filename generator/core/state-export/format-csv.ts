@@ -6,7 +6,7 @@ import { describeExport } from './export-description.ts';
 import type { StateSeries } from './state-series.ts';
 import type { StateUnits } from './state-frames.ts';
 
-export function stateCsvColumns(units: StateUnits): string[] {
+function stateCsvColumns(units: StateUnits): string[] {
   const state = units === 'km'
     ? ['xKm', 'yKm', 'zKm', 'vxKmS', 'vyKmS', 'vzKmS']
     : ['xLu', 'yLu', 'zLu', 'vxLuTu', 'vyLuTu', 'vzLuTu'];

@@ -13,10 +13,8 @@ import { withPortableMath } from './portable-math.ts';
 import { sampleGrid, type SampleSpan } from './sample-grid.ts';
 import type { StateFrame, StateUnits } from './state-frames.ts';
 
-/** The catalog's tolerance: the samples are as accurate as the orbits themselves. */
-export const EXPORT_TOLERANCE = { rtol: 1e-12, atol: 1e-12 };
 /** Model frames. */
-export const MAX_SAMPLES = 200_000;
+const MAX_SAMPLES = 200_000;
 /** EME2000 reads the ephemeris about three times per sample (~50 µs each in a browser). */
 export const MAX_DATED_SAMPLES = 50_000;
 
@@ -53,7 +51,7 @@ function computeSeries(orbit: ExportOrbit, request: StateRequest, moonAt?: MoonA
     maxSamples: frame === 'eme2000' ? MAX_DATED_SAMPLES : MAX_SAMPLES, moonAt,
   });
   const count = grid.timesNd.length;
-  const rotating = count > 1 ? sampleTrajectoryAt(orbit.mu, orbit.state0, grid.timesNd, EXPORT_TOLERANCE).states : Float64Array.from(orbit.state0);
+  const rotating = count > 1 ? sampleTrajectoryAt(orbit.mu, orbit.state0, grid.timesNd, orbit.tolerance).states : Float64Array.from(orbit.state0);
   const states = new Float64Array(6 * count);
   for (let i = 0; i < count; i++) {
     const o = 6 * i;

@@ -1,6 +1,6 @@
 // Browser side of the orbit finder: loads the column file, keeps the form, the URL and the table in step,
 // renders only the current page of rows, and saves the filtered set as CSV or JSON.
-import type { FinderDataFile } from './finder-data-types.ts';
+import type { FinderDataFile } from '../../lib/finder-data-types.ts';
 import { rowsToCsv, rowsToJson } from './finder-export.ts';
 import { filterRows } from './finder-filter.ts';
 import { DEFAULT_STATE, queryToState, stateToQuery, type FinderState } from './finder-query.ts';

@@ -6,7 +6,7 @@ import { formatField } from '../../lib/format-field.ts';
 import { idToPath } from '../../lib/id-path.ts';
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
-export const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => ESCAPES[c]!);
+const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => ESCAPES[c]!);
 
 function cellClass(field: OrbitField, value: FieldValue): string {
   if (field.type === 'flag') return value ? 'tag-cell stable' : 'tag-cell unstable';

@@ -2,7 +2,7 @@
 // one row read back as field values (for the row renderer and the exports).
 import type { FieldValue } from '../../../catalog-db/orbit-field-types.ts';
 import { FINDER_FIELDS } from '../../../catalog-db/orbit-fields.ts';
-import { FINDER_DATA_VERSION, type FinderDataFile } from './finder-data-types.ts';
+import { FINDER_DATA_VERSION, type FinderDataFile } from '../../lib/finder-data-types.ts';
 
 export interface TextColumn {
   dict: string[];
