@@ -40,7 +40,7 @@ export const ORBIT_FIELDS: readonly OrbitField[] = [
     key: 'jacobi', label: 'Jacobi constant C', finder: 'column', filter: { kind: 'range', minKey: 'cmin', maxKey: 'cmax' }, sort: 'value', page: true,
     get: (s) => s.orbit.jacobi,
   }),
-  field({ key: 'period', label: 'Period', unit: 'TU', page: true, get: (s) => s.orbit.period }),
+  field({ key: 'period', label: 'Period (model time)', unit: 'TU', page: true, get: (s) => s.orbit.period }),
   field({
     key: 'periodDays', label: 'Period', unit: 'd', format: { style: 'fixed', digits: 6 }, finder: 'column',
     filter: { kind: 'range', minKey: 'pmin', maxKey: 'pmax' }, sort: 'value', page: true, get: (s) => s.orbit.periodDays,
