@@ -1,7 +1,7 @@
 // Bad input anywhere: exactly one line naming the field or option, the value and what is allowed; exit
 // code 2; nothing already in a catalog lost or changed (checksum of every row before and after).
 // One small catalog is generated once and reused; each case runs its command in this process.
-import { mkdirSync, mkdtempSync, rmSync, symlinkSync } from 'node:fs';
+import { chmodSync, mkdirSync, mkdtempSync, rmSync, symlinkSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Command } from 'commander';
@@ -150,6 +150,10 @@ const cases: HostileCase[] = [
     args: () => [config('tiny-mu.yaml', tinyConfigWith('preset: earth-moon', '{ preset: earth-moon, secondaryGmKm3S2: 4.0e-19 }')), '--db', base],
     firstLine: /^config tiny-mu\.yaml: systems\[0\]\.secondaryGmKm3S2: 4e-19 gives mass ratio 1\.00\d*e-24 for earth-moon, outside the allowed range \[1e-10, 0\.5\]/,
   },
+  { item: 11, what: 'verify --db a text file', create: verify, args: () => ['--db', writeText(dir, 'notes.txt', 'not a catalog\n')],
+    firstLine: /^--db: "\S*notes\.txt" is not a catalog: not an SQLite file \(a catalog file written by generate\)$/ },
+  { item: 11, what: 'generate --db a text file', create: generate, args: () => ['--db', writeText(dir, 'notes.txt', 'not a catalog\n')],
+    firstLine: /^--db: "\S*notes\.txt" is not a catalog: not an SQLite file \(a catalog file to write, created if missing\)$/ },
 ];
 
 /** Each level repeats the one before nine times: 12 lines that expand to 9^12 nodes ("billion laughs"). */
@@ -171,6 +175,17 @@ describe('hostile inputs: one line, exit 2, catalogs unchanged', () => {
     copyCatalog(base, join(dir, 'merge-out.sqlite'));
     symlinkSync(base, link);
     mkdirSync(folder);
+  });
+
+  // Root may write any file, so this case can only be seen by another user.
+  it.skipIf(process.getuid?.() === 0)('item 11: generate --db a read-only catalog', async () => {
+    const readOnly = copyCatalog(base, join(dir, 'read-only.sqlite'));
+    chmodSync(readOnly, 0o444);
+    const before = catalogChecksum(readOnly);
+    const { code, stderr } = await runCommand(generate, ['--db', readOnly]);
+    expect(stderr).toBe(`--db: "${readOnly}" is read-only (a catalog file to write, created if missing)\n`);
+    expect(code).toBe(2);
+    expect(catalogChecksum(readOnly)).toBe(before);
   });
 
   it.each(cases.map((c) => [`item ${c.item}: ${c.what}`, c] as const))('%s', async (_name, c) => {
