@@ -11,7 +11,7 @@ import { correctAtFixedX0, type CorrectorOptions } from './correct-on-arc.ts';
 import type { AxisSegment, FamilyJob } from './family-job.ts';
 import { parseSignature, type LapCounts } from './lap-signature.ts';
 import type { OrbitFootprint } from './lies-on-family.ts';
-import type { ScanOptions } from './scan-axis-segment.ts';
+import type { ScanOptions, SeedCandidate } from './scan-axis-segment.ts';
 
 /** A lap-signature job as the audit needs it (a FamilyJob whose seed rule is a lap signature). */
 export type LapSignatureJob = FamilyJob & { seed: Extract<FamilyJob['seed'], { kind: 'lap-signature' }> };
@@ -67,31 +67,34 @@ export function auditContext(job: LapSignatureJob, gridFactor: number): AuditCon
 
 const sameLaps = (a: LapCounts, b: LapCounts) => a.primaryLaps === b.primaryLaps && a.secondaryLaps === b.secondaryLaps;
 
-export function auditScan(context: AuditContext, jacobi: number, segment: AxisSegment, direction: 1 | -1): AuditOrbit[] {
+/** The candidate corrected and kept if it is an orbit the catalog must hold; null otherwise. */
+function catalogOrbitOf(context: AuditContext, c: SeedCandidate, direction: 1 | -1): AuditOrbit | null {
   const { job, analysis, corrector, laps } = context;
   const mu = job.system.mu;
-  const candidates = cachedScan(mu, jacobi, segment, direction, job.seed.maxHalfCrossings, context.gridPoints, context.scan);
-  const found: AuditOrbit[] = [];
-  for (const c of candidates) {
-    const screen = screenOrbit(analysis, c.x0, c.vy0, 2 * c.tHalfNd);
-    if (screen.l1Passages === 0 || !sameLaps(screen.laps, laps)) continue;
-    const corrected = correctAtFixedX0(mu, c.halfCrossings, c.x0, c.vy0, corrector);
-    if (!corrected) continue;
-    const periodNd = 2 * corrected.shot.tHalfNd;
-    let orbit;
+  const screen = screenOrbit(analysis, c.x0, c.vy0, 2 * c.tHalfNd);
+  if (screen.l1Passages === 0 || !sameLaps(screen.laps, laps)) return null;
+  const corrected = correctAtFixedX0(mu, c.halfCrossings, c.x0, c.vy0, corrector);
+  if (!corrected) return null;
+  const periodNd = 2 * corrected.shot.tHalfNd;
+  const orbit = analyseOrbit(analysis, corrected.x0, corrected.vy0, periodNd);
+  if (orbit.l1Passages === 0 || !sameLaps(orbit.laps, laps)) return null;
+  if (orbit.primaryMinDistanceNd < context.primaryRadiusNd || orbit.secondaryMinDistanceNd < context.secondaryRadiusNd) return null;
+  if (orbit.jacobi < job.limits.jacobiMin || orbit.jacobi > job.limits.jacobiMax || periodNd > job.limits.maxPeriodNd) return null;
+  if (Math.max(Math.abs(orbit.stabilityIndex), Math.abs(orbit.verticalStabilityIndex)) > PRECISION_LIMIT_INDEX) return null;
+  return {
+    x0: corrected.x0, vy0: corrected.vy0, xHalf: corrected.shot.state[0], periodNd, jacobi: orbit.jacobi,
+    halfCrossings: c.halfCrossings, segment: c.segment, direction,
+  };
+}
+
+export function auditScan(context: AuditContext, jacobi: number, segment: AxisSegment, direction: 1 | -1): AuditOrbit[] {
+  const { job } = context;
+  const candidates = cachedScan(job.system.mu, jacobi, segment, direction, job.seed.maxHalfCrossings, context.gridPoints, context.scan);
+  return candidates.flatMap((c) => {
     try {
-      orbit = analyseOrbit(analysis, corrected.x0, corrected.vy0, periodNd);
+      return catalogOrbitOf(context, c, direction) ?? [];
     } catch {
-      continue; // a propagation that fails (collision) is no orbit of a catalog
+      return []; // a propagation that fails (a collision) is no orbit of a catalog
     }
-    if (orbit.l1Passages === 0 || !sameLaps(orbit.laps, laps)) continue;
-    if (orbit.primaryMinDistanceNd < context.primaryRadiusNd || orbit.secondaryMinDistanceNd < context.secondaryRadiusNd) continue;
-    if (orbit.jacobi < job.limits.jacobiMin || orbit.jacobi > job.limits.jacobiMax || periodNd > job.limits.maxPeriodNd) continue;
-    if (Math.max(Math.abs(orbit.stabilityIndex), Math.abs(orbit.verticalStabilityIndex)) > PRECISION_LIMIT_INDEX) continue;
-    found.push({
-      x0: corrected.x0, vy0: corrected.vy0, xHalf: corrected.shot.state[0], periodNd, jacobi: orbit.jacobi,
-      halfCrossings: c.halfCrossings, segment, direction,
-    });
-  }
-  return found;
+  });
 }
