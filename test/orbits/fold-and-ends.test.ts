@@ -1,11 +1,13 @@
 // Families are followed through folds of C and end only for reasons of their own. One E1M1 job on a
 // small discovery grid (far side of the Earth, ẏ < 0, four levels from C = 3.09 to 3.152) yields a
 // family that turns back in C at C ≈ 3.1512 with narrow stable windows at the fold, and families that
-// end at the Moon's surface, at brake orbits and at a change of lap signature.
+// end at the Moon's surface and at a change of lap signature, and that pass brake points of one of their
+// two perpendicular crossings (followed on from the other crossing).
 // Checks: the members on both sides of a fold are periodic (mirror theorem, Roy & Ovenden 1955: ẋ = 0
 // at T/2, checked with odex, an independent integrator on npm); a collision end's last member comes
 // within one continuation step of the body's radius (IAU mean lunar radius 1737.4 km, from memory); a
-// brake-orbit end's ẏ0 falls toward 0 (the start reaches the zero-velocity curve, Szebehely 1967, ch. 4);
+// family passes a brake point of its start crossing, where ẏ0 falls toward 0 (the start reaches the
+// zero-velocity curve, Szebehely 1967, ch. 4), by going on from its other crossing;
 // a signature-change end's next member along the family (corrected one step further) has another signature.
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { FamilyBundle, OrbitRow } from '../../catalog-db/types.ts';
@@ -75,13 +77,27 @@ describe('folds and natural ends (one small E1M1 job)', () => {
     }
   });
 
-  it('ends at a brake orbit where ẏ0 falls toward zero', () => {
-    const braked = bundles.filter((b) => ends(b).includes('brake-orbit'));
-    expect(braked.length).toBeGreaterThan(0);
-    for (const b of braked) {
-      const [last, previous] = endMembers(b, 'brake-orbit');
-      expect(Math.abs(last.state0[4]!), b.family.id).toBeLessThan(20 * BRAKE_SPEED_ND);
-      expect(Math.abs(last.state0[4]!), b.family.id).toBeLessThan(Math.abs(previous.state0[4]!));
+  it('passes a brake point of one crossing by going on from the other, where ẏ0 falls toward zero', () => {
+    // The switch: two neighbours that are one orbit (same C and period) stated from its two crossings.
+    const switches = bundles.flatMap((b) => b.orbits.slice(1).flatMap((o, i) => {
+      const p = b.orbits[i]!;
+      const same = Math.abs(o.jacobi - p.jacobi) < 1e-9 && Math.abs(o.period - p.period) < 1e-7 && Math.abs(o.state0[0]! - p.state0[0]!) > 1e-3;
+      return same ? [{ b, at: i }] : [];
+    }));
+    expect(switches.length).toBeGreaterThan(0);
+    for (const { b, at } of switches) {
+      const before = b.orbits.slice(Math.max(0, at - 3), at + 1).map((o) => Math.abs(o.state0[4]!));
+      const reached = before[before.length - 1]!;
+      // Either the start crossing had reached the zero-velocity curve, or the corrector had failed there.
+      if (reached < 20 * BRAKE_SPEED_ND) expect(before.every((v, i) => i === 0 || v <= before[i - 1]!), `${b.family.id}: ${before.join(' ')}`).toBe(true);
+      // The orbit goes on from the other crossing: the member after the switch is a periodic orbit.
+      const next = b.orbits[Math.min(b.orbits.length - 1, at + 2)]!;
+      const half = odexFlow(mu, next.state0, next.period / 2, { tolerance: 1e-13 }).state;
+      expect(Math.abs(half[3]!), `${next.id}: vx at T/2`).toBeLessThan(1e-6);
+    }
+    // A brake-orbit end (both crossings brake points) keeps ẏ0 near zero at its last member.
+    for (const b of bundles.filter((f) => ends(f).includes('brake-orbit'))) {
+      expect(Math.abs(endMembers(b, 'brake-orbit')[0].state0[4]!), b.family.id).toBeLessThan(20 * BRAKE_SPEED_ND);
     }
   });
 

@@ -2,7 +2,7 @@
 // in (x0, vy0), through folds of C, with a step rule that keeps every change of asinh(ν) small so that
 // no stable window is stepped over.
 import { analyseOrbit, type AnalysisContext } from './analyse-orbit.ts';
-import { correctOnArc, familyTangent, type CorrectedOrbit, type CorrectorOptions } from './correct-on-arc.ts';
+import { correctAtFixedX0, correctOnArc, familyTangent, type CorrectedOrbit, type CorrectorOptions } from './correct-on-arc.ts';
 import type { FamilyMember } from './family-member.ts';
 
 export type EndReason =
@@ -70,9 +70,9 @@ export function memberFrom(context: AnalysisContext, corrected: CorrectedOrbit, 
 /** Why this member may not join the family (started with ẏ0 of sign `direction`), or null when it may. */
 function endReasonOf(member: FamilyMember, direction: number, rules: ContinuationRules): EndReason | null {
   const a = member.analysis;
-  // ẏ0 through zero: the start reached the zero-velocity curve (a brake orbit); past it the orbits
-  // start the other way round and form another family.
-  // (Reference families shrink to their equilibrium there instead: not checked for them.)
+  // ẏ0 through zero: the start crossing reached the zero-velocity curve (a brake orbit there). The march
+  // goes on from the orbit's other crossing where it can; a family ends here only when both crossings
+  // are brake points. (Reference families shrink to their equilibrium there instead: not checked.)
   if (rules.laps && (member.vy0 * direction <= 0 || Math.abs(member.vy0) < BRAKE_SPEED_ND)) return 'brake-orbit';
   if (a.primaryMinDistanceNd < rules.primaryRadiusNd) return 'collision-primary';
   if (a.secondaryMinDistanceNd < rules.secondaryRadiusNd) return 'collision-secondary';
@@ -93,6 +93,37 @@ function tooFar(previous: FamilyMember, next: FamilyMember, rules: ContinuationR
     || Math.abs(a.periodNd - b.periodNd) > rules.maxPeriodJump * a.periodNd;
 }
 
+/** Changes of the starting crossing one march may make (each re-states one orbit from its other crossing). */
+const MAX_CROSSING_SWITCHES = 8;
+
+/**
+ * The same orbit stated from its other perpendicular crossing, with the marching direction there, or null
+ * when that crossing is itself near the zero-velocity curve or does not correct. Used where the current
+ * start crossing stops being a good continuation parameter: it reaches the zero-velocity curve (ẏ0 → 0,
+ * a brake orbit at that crossing only) or the corrector fails there. The direction points away from the
+ * previous member stated from the same crossing, so the march goes on along the family.
+ */
+function fromOtherCrossing(
+  context: AnalysisContext, halfCrossings: number, current: FamilyMember, previous: FamilyMember | null,
+  corrector: CorrectorOptions,
+): { member: FamilyMember; tangent: [number, number] } | null {
+  if (!(Math.abs(current.vyHalf) > 10 * BRAKE_SPEED_ND)) return null;
+  const corrected = correctAtFixedX0(context.mu, halfCrossings, current.xHalf, current.vyHalf, corrector);
+  if (!corrected) return null;
+  let member: FamilyMember;
+  try {
+    member = memberFrom(context, corrected, current.arclength);
+  } catch {
+    return null;
+  }
+  let tangent = member.tangent;
+  if (previous) {
+    const away = [member.x0 - previous.xHalf, member.vy0 - previous.vyHalf];
+    if (tangent[0] * away[0]! + tangent[1] * away[1]! < 0) tangent = [-tangent[0], -tangent[1]];
+  }
+  return { member, tangent };
+}
+
 /** Continues from `start` in one direction (sign ±1 along its tangent); returns the new members in order. */
 function march(
   context: AnalysisContext, halfCrossings: number, start: FamilyMember, sign: 1 | -1, budget: number,
@@ -100,9 +131,32 @@ function march(
 ): { members: FamilyMember[]; end: EndReason } {
   const members: FamilyMember[] = [];
   let current = start;
+  let previous: FamilyMember | null = null;
   let tangent: [number, number] = [sign * start.tangent[0], sign * start.tangent[1]];
   let step = rules.initialStepNd;
   let unstableRun = 0;
+  let switches = 0;
+  const accept = (member: FamilyMember) => {
+    // The stored tangent points toward growing arclength whichever way we march.
+    member.tangent = sign === 1 ? member.tangent : [-member.tangent[0], -member.tangent[1]];
+    members.push(member);
+    counted.n++;
+    hooks.onMember?.(counted.n);
+  };
+  /** Goes on from the current orbit's other crossing; false when that is not possible. */
+  const switchCrossing = (): boolean => {
+    if (switches >= MAX_CROSSING_SWITCHES || members.length >= budget) return false;
+    const other = fromOtherCrossing(context, halfCrossings, current, previous, corrector);
+    if (!other) return false;
+    switches++;
+    // The orbit is stored once more as stated from there, so that neighbours always share a crossing.
+    accept(other.member);
+    previous = null;
+    current = other.member;
+    tangent = other.tangent;
+    step = rules.initialStepNd;
+    return true;
+  };
   for (;;) {
     if (members.length >= budget) return { members, end: 'member-limit' };
     if (hooks.shouldStop?.()) return { members, end: 'interrupted' };
@@ -119,23 +173,24 @@ function march(
     // Indices and period change continuously along a family: a jump that no step size removes is a breakdown.
     if (!next || tooFar(current, next, rules)) {
       step *= 0.5;
-      if (step < rules.minStepNd) return { members, end: 'no-convergence' };
+      if (step < rules.minStepNd) {
+        if (switchCrossing()) continue;
+        return { members, end: 'no-convergence' };
+      }
       continue;
     }
-    const reason = endReasonOf(next, Math.sign(start.vy0), rules);
+    const reason = endReasonOf(next, Math.sign(current.vy0), rules);
     if (reason) {
       // Close in on the boundary before giving up, so the family reaches as far as it truly goes.
       if (step * 0.25 >= rules.minStepNd * 64) {
         step *= 0.25;
         continue;
       }
+      // A brake orbit at this crossing only: the family goes on, followed from the other crossing.
+      if (reason === 'brake-orbit' && switchCrossing()) continue;
       return { members, end: reason };
     }
-    // The stored tangent points toward growing arclength whichever way we march.
-    next.tangent = sign === 1 ? next.tangent : [-next.tangent[0], -next.tangent[1]];
-    members.push(next);
-    counted.n++;
-    hooks.onMember?.(counted.n);
+    accept(next);
     tangent = familyTangent(corrected!.shot, tangent);
     if (rules.unstableStop) {
       unstableRun = Math.abs(next.analysis.stabilityIndex) > rules.unstableStop.indexAbove ? unstableRun + 1 : 0;
@@ -144,6 +199,7 @@ function march(
     if (corrected!.iterations <= 3 && !tooFar(current, next, { ...rules, maxIndexJump: rules.maxIndexJump / 2, maxPeriodJump: rules.maxPeriodJump / 2 })) {
       step = Math.min(step * 1.5, rules.maxStepNd);
     }
+    previous = current;
     current = next;
   }
 }
