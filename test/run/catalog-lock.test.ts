@@ -6,13 +6,13 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import Database from 'better-sqlite3';
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openCatalogForRead, openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
 import { createGenerateCommand } from '../../generator/cli/commands/generate.ts';
 import { lockPathOf, tryLockCatalog } from '../../generator/run/catalog-lock.ts';
 import { catalogChecksum } from './catalog-checksum.ts';
 import { generateTiny, TINY_CONFIG, writeText } from './hostile-inputs.fixture.ts';
-import { runCommand } from './run-command.ts';
+import { runCommandQuietly } from './run-command-quietly.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'cycler-atlas-lock-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -20,17 +20,7 @@ const base = join(dir, 'base.sqlite');
 const repoRoot = fileURLToPath(new URL('../../', import.meta.url));
 const quiet = ['--workers', '1', '--progress', 'lines'];
 
-async function generateQuietly(args: string[]) {
-  const printed: string[] = [];
-  const log = vi.spyOn(console, 'log').mockImplementation((line: unknown) => { printed.push(String(line)); });
-  const error = vi.spyOn(console, 'error').mockImplementation(() => {});
-  try {
-    return { ...(await runCommand(createGenerateCommand, args)), printed };
-  } finally {
-    log.mockRestore();
-    error.mockRestore();
-  }
-}
+const generateQuietly = (args: string[]) => runCommandQuietly(createGenerateCommand, args);
 
 describe('catalog lock', () => {
   let configPath: string;

@@ -4,12 +4,12 @@ import { chmodSync, mkdirSync, mkdtempSync, readdirSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
-import { afterAll, describe, expect, it, vi } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
 import { createExportCommand } from '../../generator/cli/commands/export.ts';
 import { createVerifyCommand } from '../../generator/cli/commands/verify.ts';
 import { generateTiny } from './hostile-inputs.fixture.ts';
-import { runCommand } from './run-command.ts';
+import { runCommandQuietly } from './run-command-quietly.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'cycler-atlas-reading-'));
 afterAll(() => {
@@ -17,24 +17,11 @@ afterAll(() => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-/** Runs the command and returns its exit code, stderr and what it printed with console.log. */
-async function runPrinting(create: Parameters<typeof runCommand>[0], args: string[]) {
-  const printed: string[] = [];
-  const log = vi.spyOn(console, 'log').mockImplementation((line: unknown) => { printed.push(String(line)); });
-  const write = vi.spyOn(process.stdout, 'write').mockImplementation(() => true);
-  try {
-    return { ...(await runCommand(create, args)), printed };
-  } finally {
-    log.mockRestore();
-    write.mockRestore();
-  }
-}
-
 describe('reading commands', () => {
   it('verify on a catalog without families reports 0 orbits and exits 0', async () => {
     const empty = join(dir, 'empty.sqlite');
     openCatalogForWrite(empty).close();
-    const { code, stderr, printed } = await runPrinting(createVerifyCommand, ['--db', empty]);
+    const { code, stderr, printed } = await runCommandQuietly(createVerifyCommand, ['--db', empty]);
     expect(stderr).toBe('');
     expect(printed[0]).toMatch(/^verified 0 orbits in /);
     expect(code).toBe(0);
@@ -50,8 +37,8 @@ describe('reading commands', () => {
     db.close();
     chmodSync(path, 0o444);
     chmodSync(readOnly, 0o555); // enforced for non-root users; for root the file listing below still checks
-    const exported = await runPrinting(createExportCommand, ['--db', path, '--format', 'csv']);
-    const verified = await runPrinting(createVerifyCommand, ['--db', path]);
+    const exported = await runCommandQuietly(createExportCommand, ['--db', path, '--format', 'csv']);
+    const verified = await runCommandQuietly(createVerifyCommand, ['--db', path]);
     expect([exported.code, exported.stderr, verified.code, verified.stderr]).toEqual([0, '', 0, '']);
     expect(verified.printed[0]).toMatch(/^verified 6 orbits in .*; 0 over the limits$/);
     expect(readdirSync(readOnly)).toEqual(['finished.sqlite']);

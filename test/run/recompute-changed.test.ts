@@ -8,7 +8,7 @@ import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
 import { createGenerateCommand } from '../../generator/cli/commands/generate.ts';
 import { verifyCatalog } from '../../generator/run/verify-catalog.ts';
 import { generateTiny, tinyConfigWith, writeText } from './hostile-inputs.fixture.ts';
-import { runCommand } from './run-command.ts';
+import { runCommandQuietly } from './run-command-quietly.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'cycler-atlas-recompute-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -28,7 +28,7 @@ describe('generate --recompute-changed', () => {
     await generateTiny(db);
     const before = read(db);
     const configPath = writeText(dir, 'mu.yaml', tinyConfigWith('preset: earth-moon', '{ preset: earth-moon, secondaryGmKm3S2: 4900 }'));
-    const { code } = await runCommand(createGenerateCommand, [configPath, '--db', db, '--workers', '1', '--progress', 'lines', '--recompute-changed']);
+    const { code } = await runCommandQuietly(createGenerateCommand, [configPath, '--db', db, '--workers', '1', '--progress', 'lines', '--recompute-changed']);
     expect(code).toBe(0);
     const after = read(db);
     // μ = GM₂ / (GM₁ + GM₂) with the preset's GM Earth 398600.435436 km³/s² (DESIGN.md, from memory).
@@ -43,7 +43,7 @@ describe('generate --recompute-changed', () => {
     const db = join(dir, 'members.sqlite');
     await generateTiny(db);
     const configPath = writeText(dir, 'members.yaml', tinyConfigWith('maxMembers: 6', 'maxMembers: 8'));
-    const { code } = await runCommand(createGenerateCommand, [configPath, '--db', db, '--workers', '1', '--progress', 'lines', '--recompute-changed']);
+    const { code } = await runCommandQuietly(createGenerateCommand, [configPath, '--db', db, '--workers', '1', '--progress', 'lines', '--recompute-changed']);
     expect(code).toBe(0);
     const after = read(db);
     expect(after.families.map((f) => f.memberCount)).toEqual([8]);
