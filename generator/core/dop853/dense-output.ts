@@ -13,18 +13,40 @@ const {
   D713, D714, D715, D716, A1410, A1411, A1412, A1413, A1511, A1512,
   A1513, A1514, A1613, A1614, A1615,
 } = K;
-import { SLOT_CONT, SLOT_K1, SLOT_STAGE, SLOT_Y, SLOT_Y_NEW, type Dop853Workspace, type Rhs } from './workspace.ts';
+import {
+  SLOT_CONT, SLOT_K1, SLOT_K1_PREV, SLOT_STAGE, SLOT_Y, SLOT_Y_NEW, SLOT_Y_PREV, type Dop853Workspace, type Rhs,
+} from './workspace.ts';
 
 /**
- * After an accepted step from (t, ws.y) to (t + h, ws.yNew), with ws.k13 = f(t + h, yNew):
- * evaluates the three extra stages and stores the interpolation coefficients in ws.cont.
+ * After an accepted step from (t, ws.y) to (t + h, ws.yNew), with ws.k13 = f(t + h, yNew), and before yNew and
+ * k13 replace y and k1: keeps what the step's dense output needs. Nothing is built yet: most steps of an event
+ * search never need it, and building costs three more RHS evaluations.
  */
-export function prepareDenseOutput(rhs: Rhs, ws: Dop853Workspace, t: number, h: number): void {
+export function keepStepForDenseOutput(rhs: Rhs, ws: Dop853Workspace, t: number, h: number): void {
+  const n = ws.n;
+  const b = ws.buffer;
+  for (let i = 0, oY = SLOT_Y * n, oP = SLOT_Y_PREV * n, o1 = SLOT_K1 * n, o1P = SLOT_K1_PREV * n; i < n; i++) {
+    b[oP + i] = b[oY + i];
+    b[o1P + i] = b[o1 + i];
+  }
+  ws.denseT = t;
+  ws.denseH = h;
+  ws.denseRhs = rhs;
+  ws.denseReady = false;
+}
+
+/** Evaluates the three extra stages of the kept step and stores its interpolation coefficients in ws.cont. */
+function buildDenseOutput(ws: Dop853Workspace): void {
+  const rhs = ws.denseRhs;
+  if (rhs === null) throw new Error('dense output asked for before any accepted step with dense output on');
+  const t = ws.denseT;
+  const h = ws.denseH;
   const n = ws.n;
   const b = ws.buffer;
   const s = ws.yStage;
-  const oY = SLOT_Y * n, oNew = SLOT_Y_NEW * n, oS = SLOT_STAGE * n, oC = SLOT_CONT * n;
-  const o1 = SLOT_K1 * n, o6 = o1 + 5 * n, o7 = o6 + n, o8 = o7 + n, o9 = o8 + n, o10 = o9 + n;
+  // The step's start state and f there sit in the kept slots: y and k1 already hold the step's end.
+  const oY = SLOT_Y_PREV * n, oNew = SLOT_Y_NEW * n, oS = SLOT_STAGE * n, oC = SLOT_CONT * n;
+  const o1 = SLOT_K1_PREV * n, o6 = SLOT_K1 * n + 5 * n, o7 = o6 + n, o8 = o7 + n, o9 = o8 + n, o10 = o9 + n;
   const o11 = o10 + n, o12 = o11 + n, o13 = o12 + n, o14 = o13 + n, o15 = o14 + n, o16 = o15 + n;
   let i = 0;
   for (i = 0; i < n; i++) {
@@ -63,12 +85,16 @@ export function prepareDenseOutput(rhs: Rhs, ws: Dop853Workspace, t: number, h: 
       + D79 * b[o9 + i] + D710 * b[o10 + i] + D711 * b[o11 + i] + D712 * b[o12 + i] + D713 * b[o13 + i]
       + D714 * b[o14 + i] + D715 * b[o15 + i] + D716 * b[o16 + i]);
   }
-  ws.denseT = t;
-  ws.denseH = h;
+  ws.denseReady = true;
+  ws.denseEvaluations += 3;
 }
 
-/** Writes the first `count` components of the interpolated state at time t (inside the last step) into out. */
+/**
+ * Writes the first `count` components of the interpolated state at time t (inside the last accepted step)
+ * into out. Builds the step's dense output on first use.
+ */
 export function evaluateDenseOutput(ws: Dop853Workspace, t: number, out: Float64Array, count: number = ws.n): void {
+  if (!ws.denseReady) buildDenseOutput(ws);
   const n = ws.n;
   const c = ws.cont;
   const s = (t - ws.denseT) / ws.denseH;

@@ -1,7 +1,7 @@
 // DOP853 driver: adaptive steps with the step-size control of Hairer, Nørsett & Wanner (1993), §II.4
 // (dop853.f with β = 0, so the previous error plays no part), optional dense output, and an observer called after every accepted step.
 import { attemptStep } from './attempt-step.ts';
-import { evaluateDenseOutput, prepareDenseOutput } from './dense-output.ts';
+import { evaluateDenseOutput, keepStepForDenseOutput } from './dense-output.ts';
 import { initialStepSize } from './initial-step.ts';
 import { IntegrationError } from './integration-error.ts';
 import { SLOT_K1, SLOT_Y, SLOT_Y_NEW, type Dop853Workspace, type Rhs } from './workspace.ts';
@@ -15,14 +15,15 @@ export interface Dop853Options {
   maxSteps?: number;
   /** First step; 0 or absent: estimated. */
   initialStep?: number;
-  /** Compute dense output after every accepted step (3 more RHS evaluations per step). */
+  /** Make dense output available in the observer (3 more RHS evaluations for each step where it is used). */
   dense?: boolean;
 }
 
 export interface StepObserver {
   /**
    * Called after each accepted step from tOld to tNew; ws.y holds the state at tNew and, with dense output on,
-   * ws.cont interpolates the step. Returns a time in [tOld, tNew] at which to stop, or NaN to go on.
+   * evaluateDenseOutput interpolates the step (built on its first call). Returns a time in [tOld, tNew] at
+   * which to stop, or NaN to go on.
    */
   afterStep(ws: Dop853Workspace, tOld: number, tNew: number): number;
 }
@@ -65,6 +66,9 @@ export function integrateDop853(
   const maxSteps = options.maxSteps ?? 1_000_000;
   const dense = options.dense ?? false;
   for (let i = 0; i < n; i++) ws.y[i] = y0[i];
+  ws.denseRhs = null;
+  ws.denseReady = false;
+  ws.denseEvaluations = 0;
   const result: Dop853Result = { tFinal: t0, stoppedByObserver: false, rhsEvaluations: 0, steps: 0, rejectedSteps: 0 };
   if (span === 0) return result;
 
@@ -111,10 +115,7 @@ export function integrateDop853(
       // with the slow root below.
       rhs(tNew, ws.yNew, ws.k13);
       nfcn++;
-      if (dense) {
-        prepareDenseOutput(rhs, ws, t, h);
-        nfcn += 3;
-      }
+      if (dense) keepStepForDenseOutput(rhs, ws, t, h);
       // yNew becomes y and f(t + h) the next k1 (FSAL). The vectors stay at fixed places in ws.buffer.
       const buffer = ws.buffer;
       for (let i = 0, oY = SLOT_Y * n, oNew = SLOT_Y_NEW * n, o1 = SLOT_K1 * n, o13 = o1 + 12 * n; i < n; i++) {
@@ -146,7 +147,7 @@ export function integrateDop853(
     }
   }
   result.tFinal = t;
-  result.rhsEvaluations = nfcn;
+  result.rhsEvaluations = nfcn + ws.denseEvaluations;
   result.steps = accepted;
   result.rejectedSteps = rejections;
   return result;

@@ -14,7 +14,10 @@ export const SLOT_STAGE = 2;
 export const SLOT_K1 = 3;
 /** Dense-output coefficients: 8 blocks of n starting at this slot. */
 export const SLOT_CONT = 19;
-export const WORKSPACE_SLOTS = 27;
+/** State and f at the start of the last accepted step, kept (dense runs only) to build its dense output later. */
+export const SLOT_Y_PREV = 27;
+export const SLOT_K1_PREV = 28;
+export const WORKSPACE_SLOTS = 29;
 
 export interface Dop853Workspace {
   readonly n: number;
@@ -46,6 +49,12 @@ export interface Dop853Workspace {
   /** Start time and size of the step the dense output describes. */
   denseT: number;
   denseH: number;
+  /** The right-hand side of that step, to build its dense output on first use; null before any step. */
+  denseRhs: Rhs | null;
+  /** True once ws.cont holds the coefficients of that step. */
+  denseReady: boolean;
+  /** RHS evaluations spent building dense output (3 per step that needed it). */
+  denseEvaluations: number;
 }
 
 export function createDop853Workspace(n: number): Dop853Workspace {
@@ -63,5 +72,8 @@ export function createDop853Workspace(n: number): Dop853Workspace {
     errorNorm: 0,
     denseT: 0,
     denseH: 0,
+    denseRhs: null,
+    denseReady: false,
+    denseEvaluations: 0,
   };
 }
