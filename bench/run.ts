@@ -12,6 +12,7 @@ const BENCHES: BenchModule[] = [
   { name: 'core-integrator', load: () => import('./core-integrator.ts') },
   { name: 'generator-demo', load: () => import('./generator-demo.ts') },
   { name: 'generator-numerics', load: () => import('./generator-numerics.ts') },
+  { name: 'discovery', load: () => import('./discovery.ts') },
   { name: 'beyond-screenings', load: () => import('./beyond-screenings.ts') },
   { name: 'beyond-demo', load: () => import('./beyond-demo.ts') },
   { name: 'site-build', load: () => import('./site-build.ts') },

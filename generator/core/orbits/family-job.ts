@@ -122,4 +122,6 @@ export interface JobResult {
   interrupted: boolean;
   /** One-line remarks for the run log, e.g. a screening skipped and why. */
   notes?: string[];
+  /** Lap-signature jobs: root edges of the signature, those skipped as on a continued family, those tried. */
+  seedSearch?: { candidates: number; covered: number; tried: number };
 }

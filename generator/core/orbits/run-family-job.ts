@@ -151,7 +151,10 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
   };
 
   let coverage: FamilyCoverage | null = null;
-  const finish = (interrupted: boolean): JobResult => (notes.length > 0 ? { bundles, interrupted, notes } : { bundles, interrupted });
+  let seedSearch: JobResult['seedSearch'];
+  const finish = (interrupted: boolean): JobResult => ({
+    bundles, interrupted, ...(notes.length > 0 ? { notes } : {}), ...(seedSearch ? { seedSearch } : {}),
+  });
   // Families a stopped run already wrote for this job come first, in their order: the search skips
   // their seeds, and the families it finds next get the letters they would have had in one run.
   const stored = (inputs.stored ?? []).map((family) => storedFamilyTrace(mu, family, tolerance));
@@ -176,12 +179,18 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
     maxHalfTimeNd: limits.maxPeriodNd / 2, collisionRadiusNd: 0.5 * Math.min(primaryRadiusNd, secondaryRadiusNd),
   };
   const fruitless = new Map<string, { known: number; rejected: number }>();
-  for (const candidate of orderCandidates(wanted)) {
+  const ordered = orderCandidates(wanted);
+  seedSearch = { candidates: ordered.length, covered: 0, tried: 0 };
+  for (const candidate of ordered) {
     if (hooks.shouldStop?.()) return finish(true);
-    if (coverage.covers(candidate)) continue;
+    if (coverage.covers(candidate)) {
+      seedSearch.covered++;
+      continue;
+    }
     const piece = `${candidate.segment}${candidate.direction}:${candidate.piece}`;
     const tries = fruitless.get(piece) ?? { known: 0, rejected: 0 };
     if (tries.known >= MAX_KNOWN_TRIES_PER_PIECE || tries.rejected >= MAX_REJECTED_TRIES_PER_PIECE) continue;
+    seedSearch.tried++;
     const root = refineCandidate(mu, candidate, residualOptions);
     const corrected = root && correctAtFixedX0(mu, candidate.halfCrossings, root.x0, root.vy0, corrector);
     const start = corrected && betterConditionedStart(mu, candidate.halfCrossings, corrected, corrector);
