@@ -34,6 +34,7 @@ interface GenerateFlags {
   progress: string;
   recomputeChanged?: boolean;
   wait?: boolean;
+  force?: boolean;
 }
 
 export function createGenerateCommand(): Command {
@@ -47,7 +48,7 @@ export function createGenerateCommand(): Command {
     .option('--system <id>', 'one family without a config: system preset id, e.g. earth-moon')
     .option('--signature <sig>', 'with --system: lap signature, e.g. E2M1')
     .option('--lyapunov <point>', 'with --system: L1 or L2 Lyapunov family')
-    .option('--jacobi <list>', 'with --signature: Jacobi constants to scan at, comma-separated')
+    .option('--jacobi <list>', 'with --signature: Jacobi levels of the discovery grid instead of the built-in spacing, comma-separated')
     .option('--max-members <n>', 'with --system: member limit of the family')
     .option('--progress <mode>', `progress display: ${PROGRESS_MODES.join(', ')}`, 'auto')
     .option(
@@ -55,6 +56,7 @@ export function createGenerateCommand(): Command {
       "delete and recompute the families whose system constants or job settings differ from the catalog's (refused without it)",
     )
     .option('--wait', 'when another run holds the catalog, wait for it to finish (default: refuse, exit 2)')
+    .option('--force', 'start even when the estimated discovery work is above the bound (refused without it, with the estimate)')
     .action(async (configArg: string | undefined, flags: GenerateFlags) => {
       try {
         const summary = await generate(configArg, flags);
@@ -95,6 +97,7 @@ async function generateLocked(
     progress: flags.progress as (typeof PROGRESS_MODES)[number],
     scenario: single ? 'if-missing' : 'set',
     recomputeChanged: flags.recomputeChanged === true,
+    force: flags.force === true,
   });
   const failed = summary.jobsFailed.length;
   const totals = catalogTotals(flags.db, summary.runId);
