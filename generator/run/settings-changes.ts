@@ -1,7 +1,9 @@
 // Stored results are only valid for the settings they were computed with. Before a run writes
 // anything, compare the config's systems and jobs with what the catalog holds: a changed system
 // constant invalidates every family of that system, a changed setting of a done job that job's
-// families. Refused unless the user asks to recompute them (generate --recompute-changed).
+// families. A job stopped part-way has no stored settings yet: its written families count as changed
+// when a run with another config wrote them (resume would go on after them with the new settings).
+// Refused unless the user asks to recompute them (generate --recompute-changed).
 import { firstSettingDifference, formatSettingDifference } from '../../catalog-db/job-settings.ts';
 import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
 import { firstSystemConstantDifference } from '../../catalog-db/system-constants.ts';
@@ -20,7 +22,12 @@ export interface SettingsChanges {
   jobKeys: string[];
 }
 
-export function findSettingsChanges(reader: CatalogReader, systems: readonly SystemSpec[], jobs: readonly FamilyJob[]): SettingsChanges {
+export function findSettingsChanges(
+  reader: CatalogReader,
+  systems: readonly SystemSpec[],
+  jobs: readonly FamilyJob[],
+  configHash: string,
+): SettingsChanges {
   const changes: SettingsChanges = { lines: [], systemIds: [], jobKeys: [] };
   const storedSystems = new Map(reader.systems().map((system) => [system.id, system]));
   for (const system of systems) {
@@ -45,6 +52,14 @@ export function findSettingsChanges(reader: CatalogReader, systems: readonly Sys
     changes.jobKeys.push(job.key);
     changes.lines.push(`job ${job.key} setting ${formatSettingDifference(difference)} differs from the catalog's`);
   }
+  const runHashes = new Map(reader.runs().map((run) => [run.id, run.configHash]));
+  const stoppedFamilies = reader.families().filter((family) => !storedByKey.has(family.configKey) && !changes.jobKeys.includes(family.configKey));
+  for (const job of jobs) {
+    const other = stoppedFamilies.find((family) => family.configKey === job.key && runHashes.get(family.runId) !== configHash);
+    if (other === undefined) continue;
+    changes.jobKeys.push(job.key);
+    changes.lines.push(`job ${job.key} was stopped part-way by run ${other.runId} with another config (its written families may follow other settings)`);
+  }
   return changes;
 }
 
@@ -54,6 +69,8 @@ export interface SettleOptions {
   configPath: string;
   systems: readonly SystemSpec[];
   jobs: readonly FamilyJob[];
+  /** sha256 of this run's config text (runs.config_hash). */
+  configHash: string;
   recompute: boolean;
   log: (line: string) => void;
 }
@@ -63,7 +80,7 @@ export function settleSettingsChanges(options: SettleOptions): void {
   const reader = openCatalogForRead(options.dbPath);
   let changes: SettingsChanges;
   try {
-    changes = findSettingsChanges(reader, options.systems, options.jobs);
+    changes = findSettingsChanges(reader, options.systems, options.jobs, options.configHash);
   } finally {
     reader.close();
   }

@@ -4,6 +4,7 @@
 import { chmodSync, mkdirSync, mkdtempSync, rmSync, symlinkSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import Database from 'better-sqlite3';
 import type { Command } from 'commander';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createExportStateCommand } from '../../generator/cli/commands/export-state.ts';
@@ -21,6 +22,7 @@ const base = join(dir, 'base.sqlite');
 const other = join(dir, 'other-settings.sqlite');
 const config = (name: string, text: string) => writeText(dir, name, text);
 const link = join(dir, 'link-to-base.sqlite');
+const stopped = join(dir, 'stopped.sqlite');
 const folder = join(dir, 'a-folder');
 const longName = join(dir, `${'n'.repeat(300)}.sqlite`);
 const quoted = (path: string) => path.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
@@ -63,6 +65,12 @@ const cases: HostileCase[] = [
     item: 2, what: 'generate with another member limit for a done job', create: generate,
     args: () => [config('members.yaml', tinyConfigWith('maxMembers: 6', 'maxMembers: 7')), '--db', base],
     firstLine: /^config \S*members\.yaml: job earth-moon:L1-lyapunov setting limits\.maxMembers \(6 → 7\) differs from the catalog's; --recompute-changed/,
+  },
+  {
+    item: 2, what: 'generate with other limits on a job that a run with another config stopped part-way', create: generate,
+    args: () => [config('members-stopped.yaml', tinyConfigWith('maxMembers: 6', 'maxMembers: 7')), '--db', stopped],
+    firstLine: /^config \S*members-stopped\.yaml: job earth-moon:L1-lyapunov was stopped part-way by run 1 with another config \(its written families may follow other settings\); --recompute-changed/,
+    catalogs: () => [stopped],
   },
   {
     item: 4, what: 'merge an input whose done job used other limits', create: merge,
@@ -174,6 +182,10 @@ describe('hostile inputs: one line, exit 2, catalogs unchanged', () => {
     await generateTiny(other, tinyConfigWith('maxMembers: 6', 'maxMembers: 7'));
     copyCatalog(base, join(dir, 'merge-out.sqlite'));
     symlinkSync(base, link);
+    // A job stopped part-way: its family is written, its done mark (and so its stored settings) is not.
+    const db = new Database(copyCatalog(base, stopped));
+    db.exec('DELETE FROM jobs');
+    db.close();
     mkdirSync(folder);
   });
 
