@@ -15,11 +15,14 @@ import { settleSettingsChanges } from './settings-changes.ts';
 import { formatShard, selectShard, type Shard } from './shard.ts';
 import { createFamilyPool, defaultWorkerCount } from './worker-pool.ts';
 import { createJobWriter } from './write-job-result.ts';
+import { assertWorkWithinBound } from './work-estimate.ts';
 import { sharedDiscoveryGrids, startSharedDiscovery } from './shared-discovery.ts';
 import { storedFamiliesOfJob } from './stored-families-of-job.ts';
 
 export interface GenerateOptions {
   dbPath: string;
+  /** Start even when the discovery work is above the bound of work-estimate.ts. */
+  force?: boolean;
   /** Worker threads; default one per core (never more than there are jobs to run). */
   workers?: number;
   shard?: Shard;
@@ -60,6 +63,8 @@ export async function generateFromConfig(loaded: LoadedConfig, options: Generate
   const { config, configPath, text } = loaded;
   const jobs = selectShard(buildJobs(config, configPath), shard);
   const configHash = sha256Hex(text);
+  // Before the catalog is opened: a refused run changes nothing.
+  assertWorkWithinBound(jobs, options.force === true);
 
   const writer = openCatalogForWrite(options.dbPath);
   try {
