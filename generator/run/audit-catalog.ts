@@ -1,15 +1,18 @@
 // `audit`: the completeness check of a catalog. Reads the lap-signature jobs and their families, draws
-// the audit levels, runs the audit of each job (core/orbits/audit-job.ts) with progress on stderr and a
-// clean stop on Ctrl-C, and stores a finished audit in the catalog's audits table. An interrupted audit
-// is not stored: the catalog stays as it was.
+// the audit levels, runs the scan tasks of all jobs (core/orbits/audit-scan-tasks.ts; on worker threads
+// if asked) with progress on stderr and a clean stop on Ctrl-C, tallies each job's orbits against its
+// families (audit-tally.ts) and stores a finished audit in the catalog's audits table. An interrupted
+// audit is not stored: the catalog stays as it was.
 import type { AuditMiss, AuditRow } from '../../catalog-db/audit-types.ts';
 import { openCatalogForRead, openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
 import type { FamilyRow } from '../../catalog-db/types.ts';
 import { storedOrbitFootprint, type StoredFootprint } from '../core/orbits/audit-footprint.ts';
-import { auditJob, auditScanCount } from '../core/orbits/audit-job.ts';
+import { auditScanTasks, taskLabel } from '../core/orbits/audit-scan-tasks.ts';
 import type { AuditOrbit, LapSignatureJob } from '../core/orbits/audit-scan.ts';
+import { JobAuditTally } from '../core/orbits/audit-tally.ts';
 import { auditLevelsOfCatalog } from './audit-levels-of-catalog.ts';
 import { lapSignatureJobsOf } from './audit-jobs-of-catalog.ts';
+import { createAuditTaskRunner } from './audit-task-runner.ts';
 import { createRateProgress } from './rate-progress.ts';
 
 export interface AuditOptions {
@@ -18,6 +21,8 @@ export interface AuditOptions {
   seed: number;
   /** Scan grid density relative to each job's (default DEFAULT_GRID_FACTOR). */
   gridFactor?: number;
+  /** Worker threads for the scans (default 1: this thread). */
+  workers?: number;
   log?: (line: string) => void;
   shouldStop?: () => boolean;
 }
@@ -73,7 +78,7 @@ function readJobWork(dbPath: string, log: (line: string) => void, shouldStop?: (
   }
 }
 
-export function auditCatalog(options: AuditOptions): AuditReport {
+export async function auditCatalog(options: AuditOptions): Promise<AuditReport> {
   const startMs = Date.now();
   const gridFactor = options.gridFactor ?? DEFAULT_GRID_FACTOR;
   const log = options.log ?? ((line: string) => process.stderr.write(`${line}\n`));
@@ -84,26 +89,37 @@ export function auditCatalog(options: AuditOptions): AuditReport {
   const work = readJobWork(options.dbPath, log, options.shouldStop);
   if (work === null) return { ...row({ levels: {}, jobsAudited: 0, orbitsChecked: 0, misses: [] }), interrupted: true };
   const levels = auditLevelsOfCatalog(work.map((w) => w.job), options.levelsPerSystem, options.seed);
-  const total = work.reduce((sum, w) => sum + auditScanCount(w.job, levels[w.job.system.id]), 0);
-  const progress = createRateProgress('audit: scans (level × segment × direction)', total, log);
-  const misses: AuditMiss[] = [];
-  let orbitsChecked = 0;
-  let scansBefore = 0;
+  const tasks = auditScanTasks(work.map((w) => w.job), levels, gridFactor);
+  const tallies = new Map(work.map((w) => [w.job.key, new JobAuditTally(w.job, gridFactor, w.families)]));
+  const runner = createAuditTaskRunner(Math.max(1, Math.min(options.workers ?? 1, tasks.length)));
+  const progress = createRateProgress('audit: scans (level × segment × direction)', tasks.length, log);
+  const poll = setInterval(() => options.shouldStop?.() && runner.stop(), 100);
   let interrupted = false;
-  for (const { job, families } of work) {
-    const result = auditJob({ job, levels: levels[job.system.id], families, gridFactor }, {
-      onScan: (done, _total, label) => progress.step(scansBefore + done, label),
-      shouldStop: options.shouldStop,
-    });
-    scansBefore += auditScanCount(job, levels[job.system.id]);
-    orbitsChecked += result.orbitsChecked;
-    misses.push(...result.misses.map((orbit) => missOf(job, orbit)));
-    if (result.interrupted) {
-      interrupted = true;
-      break;
+  try {
+    let done = 0;
+    const results = tasks.map((task) => runner.run(task).then((found) => {
+      if (found) progress.step(++done, taskLabel(task));
+      return found;
+    }));
+    // Tallied in task order, so that the same seed gives the same audit whatever the timing.
+    for (const [index, result] of results.entries()) {
+      const found = await result;
+      if (found === null) {
+        interrupted = true;
+        continue;
+      }
+      tasks[index].jobs.forEach((job, j) => tallies.get(job.key)!.add(found[j]));
     }
+  } finally {
+    clearInterval(poll);
+    await runner.destroy();
   }
-  const audit = row({ levels, jobsAudited: work.length, orbitsChecked, misses });
+  const jobTallies = [...tallies.values()];
+  const audit = row({
+    levels, jobsAudited: work.length,
+    orbitsChecked: jobTallies.reduce((sum, t) => sum + t.checked.length, 0),
+    misses: jobTallies.flatMap((t) => t.misses.map((orbit) => missOf(t.job, orbit))),
+  });
   if (interrupted) return { ...audit, interrupted };
   const writer = openCatalogForWrite(options.dbPath);
   try {

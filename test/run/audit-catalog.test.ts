@@ -1,8 +1,10 @@
 // The completeness audit on a small catalog (test/run/fixtures/audit-catalog.yaml: one E1M1 family over
 // a narrowed C range and the L1 Lyapunov family):
-// - it passes on the complete catalog (exit 0) and stores its row, read back with the seed and levels;
+// - it passes on the complete catalog (exit 0, scans on 2 worker threads) and stores its row, read back
+//   with the seed and levels;
 // - on a copy with the E1M1 family deleted it exits 1 and prints the orbits it found, which lie on the
-//   deleted family (mirror theorem, Roy & Ovenden 1955: each is a symmetric periodic orbit of that family);
+//   deleted family (mirror theorem, Roy & Ovenden 1955: each is a symmetric periodic orbit of that family),
+//   the same levels with one thread as with two;
 // - membership holds at either perpendicular crossing: an orbit re-corrected from its other crossing
 //   (mirror theorem) is on the family, and so is one between members of a thinned family (refinement);
 // - stopped (Ctrl-C) after its first scan, it says so and stores nothing (common practice);
@@ -63,7 +65,7 @@ describe('cycler-atlas audit', () => {
   });
 
   it('passes on the complete catalog (exit 0) and stores the audit with its seed and levels', async () => {
-    const run = await runCli(['audit', '--db', completePath, '--levels', LEVELS, '--seed', '11']);
+    const run = await runCli(['audit', '--db', completePath, '--levels', LEVELS, '--seed', '11', '--workers', '2']);
     expect(run.stdout).toContain('seed 11 (repeat with --seed 11)');
     expect(run.code, run.stdout + run.stderr).toBe(0);
     // Progress on stderr says what, how far and the rate (common practice).
@@ -82,7 +84,7 @@ describe('cycler-atlas audit', () => {
     db.pragma('foreign_keys = ON');
     db.prepare('DELETE FROM families WHERE id = ?').run(E1M1_FAMILY);
     db.close();
-    const run = await runCli(['audit', '--db', copyPath, '--levels', LEVELS, '--seed', '11']);
+    const run = await runCli(['audit', '--db', copyPath, '--levels', LEVELS, '--seed', '11', '--workers', '1']);
     expect(run.code, run.stdout + run.stderr).toBe(1);
     const [audit] = storedAudits(copyPath);
     // Same seed, same levels as on the complete catalog (the draw is seeded).
@@ -98,10 +100,10 @@ describe('cycler-atlas audit', () => {
     }
   });
 
-  it('stops when asked between scans and leaves the catalog as it was', () => {
+  it('stops when asked between scans and leaves the catalog as it was', async () => {
     const before = storedAudits(completePath).length;
     let polls = 0;
-    const report = auditCatalog({ dbPath: completePath, levelsPerSystem: 3, seed: 5, log: () => {}, shouldStop: () => polls++ > 0 });
+    const report = await auditCatalog({ dbPath: completePath, levelsPerSystem: 3, seed: 5, log: () => {}, shouldStop: () => polls++ > 0 });
     expect(report.interrupted).toBe(true);
     expect(report.auditId).toBeUndefined();
     expect(storedAudits(completePath)).toHaveLength(before);

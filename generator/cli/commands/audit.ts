@@ -1,4 +1,4 @@
-// `cycler-atlas audit --db FILE [--levels N] [--seed S]`: the completeness audit. At N random Jacobi
+// `cycler-atlas audit --db FILE [--levels N] [--seed S] [--grid-factor F] [--workers N]`: the completeness audit. At N random Jacobi
 // levels per system (seeded; the seed is printed so that the audit can be repeated) that discovery did
 // not use, every segment, direction and crossing count of each lap-signature job is scanned afresh; each
 // symmetric orbit found with the job's signature and an L1 passage must lie on a catalogued family of
@@ -10,6 +10,7 @@ import { auditCatalog, DEFAULT_GRID_FACTOR } from '../../run/audit-catalog.ts';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
 import { parseIntegerOption, UsageError } from '../../run/command-line-values.ts';
 import { handleInterrupts, INTERRUPTED_EXIT_CODE } from '../../run/interrupt-handler.ts';
+import { defaultWorkerCount } from '../../run/worker-pool.ts';
 
 const DEFAULT_DB_PATH = 'catalog-db/demo.sqlite';
 export const DEFAULT_AUDIT_LEVELS = 6;
@@ -31,19 +32,21 @@ export function createAuditCommand(): Command {
     .option('--db <file>', 'catalog file to audit (the audit is stored in it)', DEFAULT_DB_PATH)
     .option('--levels <n>', `random Jacobi levels per system (default ${DEFAULT_AUDIT_LEVELS})`)
     .option('--grid-factor <f>', `scan with f times each job's start points per segment (default ${DEFAULT_GRID_FACTOR})`)
+    .option('--workers <n>', 'worker threads for the scans (default: one per core)')
     .option('--seed <s>', 'seed of the level draw, to repeat an audit (default: from the clock, printed)')
-    .action((flags: { db: string; levels?: string; seed?: string; gridFactor?: string }) => {
+    .action(async (flags: { db: string; levels?: string; seed?: string; gridFactor?: string; workers?: string }) => {
       try {
         const levelsPerSystem = flags.levels === undefined ? DEFAULT_AUDIT_LEVELS : parseIntegerOption('--levels', flags.levels, 1, MAX_AUDIT_LEVELS);
         const seed = flags.seed === undefined ? Date.now() % (MAX_SEED + 1) : parseIntegerOption('--seed', flags.seed, 0, MAX_SEED);
         const gridFactor = flags.gridFactor === undefined ? DEFAULT_GRID_FACTOR : parseIntegerOption('--grid-factor', flags.gridFactor, 1, MAX_GRID_FACTOR);
+        const workers = flags.workers === undefined ? defaultWorkerCount() : parseIntegerOption('--workers', flags.workers, 1, 256);
         if (!existsSync(flags.db)) throw new UsageError(`--db: "${flags.db}" does not exist (a catalog file written by generate)`);
         console.log(`audit of ${flags.db}: ${levelsPerSystem} level(s) per system, ${gridFactor}× each job's scan grid, seed ${seed} (repeat with --seed ${seed})`);
         let stop = false;
         const removeHandler = handleInterrupts(() => (stop = true), (line) => process.stderr.write(`${line}\n`));
-        const report = (() => {
+        const report = await (async () => {
           try {
-            return auditCatalog({ dbPath: flags.db, levelsPerSystem, seed, gridFactor, shouldStop: () => stop });
+            return await auditCatalog({ dbPath: flags.db, levelsPerSystem, seed, gridFactor, workers, shouldStop: () => stop });
           } finally {
             removeHandler();
           }
