@@ -146,6 +146,7 @@ describe('audit and generate --shard auto: bad arguments in one line naming the 
     [createAuditCommand, ['--seed', '-4'], '--seed: "-4" is not allowed (an integer from 0 to 4294967295)'],
     [createAuditCommand, ['--grid-factor', '0.5'], '--grid-factor: "0.5" is not allowed (an integer from 1 to 64)'],
     [createAuditCommand, ['--db', 'test/run/fixtures/none.sqlite'], '--db: "test/run/fixtures/none.sqlite" does not exist (a catalog file written by generate)'],
+    [createAuditCommand, ['--db', 'test/run/fixtures/audit-catalog.yaml'], '--db: "test/run/fixtures/audit-catalog.yaml" is not a catalog: not an SQLite file (a catalog file written by generate)'],
     [createGenerateCommand, ['--shard', 'auto', '--db', 'test/run/fixtures/none.sqlite'],
       '--shard auto: neither SLURM_ARRAY_TASK_ID (SLURM job array) nor JOB_COMPLETION_INDEX (Kubernetes Indexed Job) is set; give --shard k/n instead'],
     [createGenerateCommand, ['--shard', '1/2', '--shard-count', '2'], '--shard-count: only allowed with --shard auto (got --shard 1/2)'],

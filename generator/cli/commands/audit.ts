@@ -3,13 +3,13 @@
 // not use, every segment, direction and crossing count of each lap-signature job is scanned afresh; each
 // symmetric orbit found with the job's signature and an L1 passage must lie on a catalogued family of
 // the job. Prints those that do not, with their states. Exit 0 none, 1 some, 2 bad arguments, 130 Ctrl-C.
-import { existsSync } from 'node:fs';
 import { Command } from 'commander';
 import type { AuditMiss } from '../../../catalog-db/audit-types.ts';
 import { auditCatalog, DEFAULT_GRID_FACTOR } from '../../run/audit-catalog.ts';
 import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
-import { parseIntegerOption, UsageError } from '../../run/command-line-values.ts';
+import { parseIntegerOption } from '../../run/command-line-values.ts';
 import { handleInterrupts, INTERRUPTED_EXIT_CODE } from '../../run/interrupt-handler.ts';
+import { assertReadableCatalogPath, assertWritableCatalogPath } from '../../run/path-options.ts';
 import { defaultWorkerCount } from '../../run/worker-pool.ts';
 
 const DEFAULT_DB_PATH = 'catalog-db/demo.sqlite';
@@ -40,7 +40,8 @@ export function createAuditCommand(): Command {
         const seed = flags.seed === undefined ? Date.now() % (MAX_SEED + 1) : parseIntegerOption('--seed', flags.seed, 0, MAX_SEED);
         const gridFactor = flags.gridFactor === undefined ? DEFAULT_GRID_FACTOR : parseIntegerOption('--grid-factor', flags.gridFactor, 1, MAX_GRID_FACTOR);
         const workers = flags.workers === undefined ? defaultWorkerCount() : parseIntegerOption('--workers', flags.workers, 1, 256);
-        if (!existsSync(flags.db)) throw new UsageError(`--db: "${flags.db}" does not exist (a catalog file written by generate)`);
+        assertReadableCatalogPath('--db', flags.db);
+        assertWritableCatalogPath('--db', flags.db); // the audit is stored in it
         console.log(`audit of ${flags.db}: ${levelsPerSystem} level(s) per system, ${gridFactor}× each job's scan grid, seed ${seed} (repeat with --seed ${seed})`);
         let stop = false;
         const removeHandler = handleInterrupts(() => (stop = true), (line) => process.stderr.write(`${line}\n`));
