@@ -82,7 +82,7 @@ function continuation(label: string, halfCrossings: number, x0: number, vy0: num
     return;
   }
   const start = memberFrom(context, seed, 0);
-  const run = timed(() => continueFamily(context, halfCrossings, start, rules, corrector));
+  const run = timed(() => continueFamily(context, start, rules, corrector));
   const members = run.value.members.length - 1; // the seed was corrected before the clock started
   console.log(`  ${label}: ${members} members in ${(run.ms / 1000).toFixed(2)} s = ${((members * 1000) / run.ms).toFixed(1)} members/s`
     + ` (ends: ${run.value.endReasonStart}, ${run.value.endReasonEnd})`);

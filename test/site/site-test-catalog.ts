@@ -63,7 +63,7 @@ export function writeSiteTestCatalog(path: string, synthetic = { orbitCount: 40,
     const xL1 = lagrangePoints(ARENSTORF.mu).find((p) => p.name === 'L1')!.x;
     const analysis = analyseOrbit({ mu: ARENSTORF.mu, xL1, rtol: 1e-12, atol: 1e-12 }, ARENSTORF.x0, ARENSTORF.vy0, ARENSTORF.periodNd);
     const orbit = orbitRowOf(arenstorfSystem, ARENSTORF_FAMILY_ID, 0, {
-      x0: ARENSTORF.x0, vy0: ARENSTORF.vy0, xHalf: NaN, vyHalf: NaN, tHalfNd: ARENSTORF.periodNd / 2, arclength: 0, analysis, tangent: [0, 1],
+      x0: ARENSTORF.x0, vy0: ARENSTORF.vy0, xHalf: NaN, vyHalf: NaN, halfCrossings: 1, tHalfNd: ARENSTORF.periodNd / 2, arclength: 0, analysis, tangent: [0, 1],
     });
     const bundle: FamilyBundle = {
       family: {

@@ -60,6 +60,7 @@ export function memberFrom(context: AnalysisContext, corrected: CorrectedOrbit, 
     vy0: corrected.vy0,
     xHalf: corrected.shot.state[0],
     vyHalf: corrected.shot.state[3],
+    halfCrossings: corrected.halfCrossings,
     tHalfNd: tHalf,
     arclength,
     analysis: analyseOrbit(context, corrected.x0, corrected.vy0, 2 * tHalf),
@@ -104,11 +105,11 @@ const MAX_CROSSING_SWITCHES = 8;
  * previous member stated from the same crossing, so the march goes on along the family.
  */
 function fromOtherCrossing(
-  context: AnalysisContext, halfCrossings: number, current: FamilyMember, previous: FamilyMember | null,
-  corrector: CorrectorOptions,
+  context: AnalysisContext, current: FamilyMember, previous: FamilyMember | null, corrector: CorrectorOptions,
 ): { member: FamilyMember; tangent: [number, number] } | null {
   if (!(Math.abs(current.vyHalf) > 10 * BRAKE_SPEED_ND)) return null;
-  const corrected = correctAtFixedX0(context.mu, halfCrossings, current.xHalf, current.vyHalf, corrector);
+  // The second half mirrors the first, so T/2 is the same crossing count from either end.
+  const corrected = correctAtFixedX0(context.mu, current.halfCrossings, current.xHalf, current.vyHalf, corrector);
   if (!corrected) return null;
   let member: FamilyMember;
   try {
@@ -124,9 +125,36 @@ function fromOtherCrossing(
   return { member, tangent };
 }
 
+/**
+ * One step beyond `current` with T/2 two crossings later or earlier: where the orbit touches the x-axis
+ * (a tangency), a pair of crossings appears or vanishes before T/2 and the residual at the old count
+ * jumps, though the family goes on. Null when neither count corrects to a continuous neighbour.
+ */
+function acrossTangency(
+  context: AnalysisContext, current: FamilyMember, tangent: [number, number], sign: 1 | -1, stepNd: number,
+  rules: ContinuationRules, corrector: CorrectorOptions,
+): { member: FamilyMember; corrected: CorrectedOrbit } | null {
+  for (const k of [current.halfCrossings + 2, current.halfCrossings - 2]) {
+    if (k < 1) continue;
+    const options = { ...corrector, maxTimeNd: Math.min(rules.maxPeriodNd, 3 * current.tHalfNd) };
+    for (const step of [stepNd, 4 * stepNd, 16 * stepNd]) {
+      const corrected = correctOnArc(context.mu, k, [current.x0, current.vy0], tangent, step, options);
+      if (!corrected || corrected.shot.earlierVx.some((vx) => Math.abs(vx) < 1e-6)) continue;
+      let member: FamilyMember;
+      try {
+        member = memberFrom(context, corrected, current.arclength + sign * Math.hypot(corrected.x0 - current.x0, corrected.vy0 - current.vy0), tangent);
+      } catch {
+        continue;
+      }
+      if (!tooFar(current, member, rules)) return { member, corrected };
+    }
+  }
+  return null;
+}
+
 /** Continues from `start` in one direction (sign ±1 along its tangent); returns the new members in order. */
 function march(
-  context: AnalysisContext, halfCrossings: number, start: FamilyMember, sign: 1 | -1, budget: number,
+  context: AnalysisContext, start: FamilyMember, sign: 1 | -1, budget: number,
   rules: ContinuationRules, corrector: CorrectorOptions, hooks: ContinuationHooks, counted: { n: number },
 ): { members: FamilyMember[]; end: EndReason } {
   const members: FamilyMember[] = [];
@@ -146,7 +174,7 @@ function march(
   /** Goes on from the current orbit's other crossing; false when that is not possible. */
   const switchCrossing = (): boolean => {
     if (switches >= MAX_CROSSING_SWITCHES || members.length >= budget) return false;
-    const other = fromOtherCrossing(context, halfCrossings, current, previous, corrector);
+    const other = fromOtherCrossing(context, current, previous, corrector);
     if (!other) return false;
     switches++;
     // The orbit is stored once more as stated from there, so that neighbours always share a crossing.
@@ -161,7 +189,7 @@ function march(
     if (members.length >= budget) return { members, end: 'member-limit' };
     if (hooks.shouldStop?.()) return { members, end: 'interrupted' };
     const options = { ...corrector, maxTimeNd: Math.min(rules.maxPeriodNd, 3 * current.tHalfNd) };
-    const corrected = correctOnArc(context.mu, halfCrossings, [current.x0, current.vy0], tangent, step, options);
+    let corrected = correctOnArc(context.mu, current.halfCrossings, [current.x0, current.vy0], tangent, step, options);
     let next: FamilyMember | null = null;
     if (corrected) {
       try {
@@ -173,11 +201,17 @@ function march(
     // Indices and period change continuously along a family: a jump that no step size removes is a breakdown.
     if (!next || tooFar(current, next, rules)) {
       step *= 0.5;
-      if (step < rules.minStepNd) {
+      if (step >= rules.minStepNd) continue;
+      // No step at this crossing count and start crossing: another count (a tangency), or the other crossing.
+      const across = acrossTangency(context, current, tangent, sign, rules.initialStepNd, rules, corrector);
+      if (across) {
+        next = across.member;
+        corrected = across.corrected;
+        step = rules.initialStepNd;
+      } else {
         if (switchCrossing()) continue;
         return { members, end: 'no-convergence' };
       }
-      continue;
     }
     const reason = endReasonOf(next, Math.sign(current.vy0), rules);
     if (reason) {
@@ -206,13 +240,13 @@ function march(
 
 /** Continues a family both ways from a corrected seed; members come ordered by arclength. */
 export function continueFamily(
-  context: AnalysisContext, halfCrossings: number, seed: FamilyMember, rules: ContinuationRules,
+  context: AnalysisContext, seed: FamilyMember, rules: ContinuationRules,
   corrector: CorrectorOptions, hooks: ContinuationHooks = {},
 ): ContinuationResult {
   const counted = { n: 1 };
   const budget = Math.max(0, rules.maxMembers - 1);
-  const forward = march(context, halfCrossings, seed, 1, Math.ceil(budget / 2), rules, corrector, hooks, counted);
-  const backward = march(context, halfCrossings, seed, -1, budget - forward.members.length, rules, corrector, hooks, counted);
+  const forward = march(context, seed, 1, Math.ceil(budget / 2), rules, corrector, hooks, counted);
+  const backward = march(context, seed, -1, budget - forward.members.length, rules, corrector, hooks, counted);
   return {
     members: [...backward.members.reverse(), seed, ...forward.members],
     endReasonStart: backward.end,

@@ -6,6 +6,8 @@ import { crossingVxGradient, halfPeriodShot, type HalfPeriodShot, type ShotOptio
 export interface CorrectedOrbit {
   x0: number;
   vy0: number;
+  /** The crossing of y = 0 at T/2 (1 = the first after the start). */
+  halfCrossings: number;
   shot: HalfPeriodShot;
   iterations: number;
 }
@@ -40,7 +42,7 @@ export function correctOnArc(
     if (!Number.isFinite(det) || det === 0) return null;
     const dx = -(residual * tangent[1] - g1 * arc) / det;
     const dv = -(g0 * arc - residual * tangent[0]) / det;
-    if (converged(residual, Math.hypot(dx, dv), iteration, options)) return { x0, vy0, shot, iterations: iteration };
+    if (converged(residual, Math.hypot(dx, dv), iteration, options)) return { x0, vy0, halfCrossings, shot, iterations: iteration };
     x0 += dx;
     vy0 += dv;
     if (!Number.isFinite(x0) || !Number.isFinite(vy0)) return null;
@@ -66,7 +68,7 @@ export function correctAtFixedX0(mu: number, halfCrossings: number, x0: number, 
     const residual = shot.state[2];
     const slope = crossingVxGradient(shot)[1];
     const dv = -residual / slope;
-    if (converged(residual, Math.abs(dv), iteration, options)) return { x0, vy0, shot, iterations: iteration };
+    if (converged(residual, Math.abs(dv), iteration, options)) return { x0, vy0, halfCrossings, shot, iterations: iteration };
     vy0 += Math.max(-0.1, Math.min(0.1, dv)); // damped: a bad guess should not fly off to another family
     if (!Number.isFinite(vy0)) return null;
   }

@@ -9,6 +9,9 @@ export interface FamilyMember {
   /** ẏ there (its sign is the start direction of the same orbit seen from that crossing). */
   vyHalf: number;
   tHalfNd: number;
+  /** T/2 is the halfCrossings-th crossing of y = 0 (it changes along a family where a tangency to the
+   *  x-axis adds or removes a pair of crossings). */
+  halfCrossings: number;
   arclength: number;
   analysis: OrbitAnalysis;
   /** Unit tangent of the family curve here, pointing in the direction of growing arclength. */

@@ -13,8 +13,21 @@ export function indexOf(member: FamilyMember, kind: IndexKind): number {
 }
 
 /** The member between a and b where the index equals target (±1) to `indexTolerance`, or null if it cannot be corrected. */
+/** Corrected on the hyperplane at `distance` along the secant from a, at a's crossing count, else b's. */
+function correctOnSecant(
+  context: AnalysisContext, a: FamilyMember, b: FamilyMember, direction: [number, number], distance: number, options: CorrectorOptions,
+) {
+  return correctOnArc(context.mu, a.halfCrossings, [a.x0, a.vy0], direction, distance, options)
+    ?? (b.halfCrossings !== a.halfCrossings ? correctOnArc(context.mu, b.halfCrossings, [a.x0, a.vy0], direction, distance, options) : null);
+}
+
+/** Neighbours that are one orbit stated from its two crossings (a family's switch of start crossing). */
+export function oneOrbit(a: FamilyMember, b: FamilyMember): boolean {
+  return Math.abs(a.analysis.jacobi - b.analysis.jacobi) < 1e-12 && Math.abs(a.analysis.periodNd - b.analysis.periodNd) < 1e-9 * a.analysis.periodNd;
+}
+
 export function locateIndexCrossing(
-  context: AnalysisContext, halfCrossings: number, a: FamilyMember, b: FamilyMember, kind: IndexKind, target: 1 | -1,
+  context: AnalysisContext, a: FamilyMember, b: FamilyMember, kind: IndexKind, target: 1 | -1,
   indexTolerance: number, corrector: CorrectorOptions,
 ): FamilyMember | null {
   const chord = Math.hypot(b.x0 - a.x0, b.vy0 - a.vy0);
@@ -22,7 +35,7 @@ export function locateIndexCrossing(
   const options = { ...corrector, maxTimeNd: 3 * Math.max(a.tHalfNd, b.tHalfNd) };
   let last: FamilyMember | null = null;
   const memberAt = (sigma: number): FamilyMember | null => {
-    const corrected = correctOnArc(context.mu, halfCrossings, [a.x0, a.vy0], direction, sigma * chord, options);
+    const corrected = correctOnSecant(context, a, b, direction, sigma * chord, options);
     if (!corrected) return null;
     const arclength = a.arclength + sigma * (b.arclength - a.arclength);
     return memberFrom(context, corrected, arclength, a.tangent);
@@ -49,12 +62,13 @@ export function locateIndexCrossing(
 
 /** The member at fraction σ of the way from a to b (for a window's middle orbit). */
 export function memberBetween(
-  context: AnalysisContext, halfCrossings: number, a: FamilyMember, b: FamilyMember, sigma: number, corrector: CorrectorOptions,
+  context: AnalysisContext, a: FamilyMember, b: FamilyMember, sigma: number, corrector: CorrectorOptions,
 ): FamilyMember | null {
+  if (oneOrbit(a, b)) return a; // nothing lies between one orbit and itself
   const chord = Math.hypot(b.x0 - a.x0, b.vy0 - a.vy0);
   const direction: [number, number] = [(b.x0 - a.x0) / chord, (b.vy0 - a.vy0) / chord];
   const options = { ...corrector, maxTimeNd: 3 * Math.max(a.tHalfNd, b.tHalfNd) };
-  const corrected = correctOnArc(context.mu, halfCrossings, [a.x0, a.vy0], direction, sigma * chord, options);
+  const corrected = correctOnSecant(context, a, b, direction, sigma * chord, options);
   if (!corrected) return null;
   try {
     return memberFrom(context, corrected, a.arclength + sigma * (b.arclength - a.arclength), a.tangent);

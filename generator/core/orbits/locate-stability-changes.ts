@@ -26,7 +26,7 @@ export interface StabilityMap {
 }
 
 export function locateStabilityChanges(
-  context: AnalysisContext, halfCrossings: number, members: readonly FamilyMember[], indexTolerance: number,
+  context: AnalysisContext, members: readonly FamilyMember[], indexTolerance: number,
   corrector: CorrectorOptions, shouldStop?: () => boolean,
 ): StabilityMap | null {
   const changes: StabilityChange[] = [];
@@ -40,7 +40,7 @@ export function locateStabilityChanges(
     for (const kind of ['in-plane', 'vertical'] as const) {
       for (const target of [1, -1] as const) {
         if ((indexOf(a, kind) - target) * (indexOf(b, kind) - target) < 0) {
-          const member = locateIndexCrossing(context, halfCrossings, a, b, kind, target, indexTolerance, corrector);
+          const member = locateIndexCrossing(context, a, b, kind, target, indexTolerance, corrector);
           if (member) found.push({ member, kind, target });
         }
       }
@@ -51,11 +51,11 @@ export function locateStabilityChanges(
       all.push(change.member);
     }
   }
-  return { members: all, changes, windows: stableStretches(context, halfCrossings, all, changes, corrector) };
+  return { members: all, changes, windows: stableStretches(context, all, changes, corrector) };
 }
 
 function stableStretches(
-  context: AnalysisContext, halfCrossings: number, members: FamilyMember[], changes: StabilityChange[],
+  context: AnalysisContext, members: FamilyMember[], changes: StabilityChange[],
   corrector: CorrectorOptions,
 ): StableStretch[] {
   const edges = new Set(changes.filter((c) => c.kind === 'in-plane').map((c) => c.member));
@@ -67,7 +67,7 @@ function stableStretches(
     while (j + 1 < members.length && inside(members[j + 1])) j++;
     // A run of edges alone may bound an unstable gap; its middle decides.
     if (j > i) {
-      const middle = middleOf(context, halfCrossings, members, i, j, corrector);
+      const middle = middleOf(context, members, i, j, corrector);
       if (Math.abs(middle.analysis.stabilityIndex) < 1) stretches.push({ from: members[i], to: members[j], middle });
     }
     i = j;
@@ -77,7 +77,7 @@ function stableStretches(
 
 /** The member at the arclength midpoint of members[i..j], corrected there. */
 function middleOf(
-  context: AnalysisContext, halfCrossings: number, members: FamilyMember[], i: number, j: number, corrector: CorrectorOptions,
+  context: AnalysisContext, members: FamilyMember[], i: number, j: number, corrector: CorrectorOptions,
 ): FamilyMember {
   const target = 0.5 * (members[i].arclength + members[j].arclength);
   let k = i;
@@ -85,5 +85,5 @@ function middleOf(
   if (k === j) return members[j];
   const a = members[k], b = members[k + 1];
   const sigma = (target - a.arclength) / (b.arclength - a.arclength);
-  return memberBetween(context, halfCrossings, a, b, sigma, corrector) ?? (sigma < 0.5 ? a : b);
+  return memberBetween(context, a, b, sigma, corrector) ?? (sigma < 0.5 ? a : b);
 }

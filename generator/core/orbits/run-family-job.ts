@@ -115,7 +115,7 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
       jobKey: job.key, familyLabel, familiesDone: continued.length, members, maxMembers: limits.maxMembers,
     });
     progress(1);
-    const result = continueFamily(context, seed.halfCrossings, start, rules, corrector, {
+    const result = continueFamily(context, start, rules, corrector, {
       onMember: progress,
       shouldStop: hooks.shouldStop,
     });
@@ -124,8 +124,8 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
     // family's ends or between sparse members): then it is that family again.
     if (result.members.filter((m, i) => i % 4 === 0 && isKnown(m)).length >= 2) return 'known';
     continued.push(result.members);
-    coverage?.addFamily(result.members.map((m) => ({ x0: m.x0, vy0: m.vy0, xHalf: m.xHalf, vyHalf: m.vyHalf, jacobi: m.analysis.jacobi })), seed.halfCrossings);
-    const map = locateStabilityChanges(context, seed.halfCrossings, result.members, job.indexTolerance, corrector, hooks.shouldStop);
+    coverage?.addFamily(result.members.map((m) => ({ x0: m.x0, vy0: m.vy0, xHalf: m.xHalf, vyHalf: m.vyHalf, jacobi: m.analysis.jacobi, halfCrossings: m.halfCrossings })));
+    const map = locateStabilityChanges(context, result.members, job.indexTolerance, corrector, hooks.shouldStop);
     if (!map) return 'interrupted';
     const bundle = buildFamilyBundle(system, {
       id: `${system.id}/${label}/${letter}`, jobKey: job.key, name: rule.kind === 'lap-signature' ? `${job.name} (${letter})` : job.name, kind, signature: label, seedSegment: seed.segment,
@@ -170,7 +170,7 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
   const discovered = inputs.discovered ?? discoverForJob(job, hooks);
   if (discovered === null) return finish(true);
   coverage = new FamilyCoverage(mu, new Map(discovered.map((d) => [FamilyCoverage.gridId(d.request.segment, d.request.direction), { xs: d.xs, levels: d.request.levels }])));
-  for (const family of stored) coverage.addFamily(family.points, family.halfCrossings);
+  for (const family of stored) coverage.addFamily(family.points);
   const wanted = discovered
     .filter((d) => rule.segments.includes(d.request.segment) && rule.directions.includes(d.request.direction))
     .flatMap((d) => candidatesOfSignature(d.candidates, laps!, rule.maxHalfCrossings));

@@ -14,23 +14,20 @@ export interface StoredFamily {
 
 export interface StoredFamilyTrace {
   id: string;
-  halfCrossings: number;
   points: Array<FamilyTracePoint & { periodNd: number }>;
 }
 
 export function storedFamilyTrace(mu: number, family: StoredFamily, tolerance: { rtol: number; atol: number }): StoredFamilyTrace {
-  let halfCrossings = 0;
   const points = family.members.map(({ state0, periodNd }) => {
     const planar = [state0[0]!, state0[1]!, state0[3]!, state0[4]!];
     // A little past T/2 so that the perpendicular crossing there is counted, well before the next one.
     const run = propagate(mu, planar, periodNd * (0.5 + 1e-7), { ...tolerance, events: [yAxisCrossing()] });
     const crossings = run.events.filter((e) => e.tNd > 1e-9 * periodNd);
     const half = crossings[crossings.length - 1];
-    halfCrossings = Math.max(halfCrossings, crossings.length);
     return {
       x0: planar[0]!, vy0: planar[3]!, xHalf: half ? half.state[0]! : NaN, vyHalf: half ? half.state[4]! : NaN,
-      jacobi: jacobiConstant(mu, planar, true), periodNd,
+      jacobi: jacobiConstant(mu, planar, true), periodNd, halfCrossings: crossings.length,
     };
   });
-  return { id: family.id, halfCrossings, points };
+  return { id: family.id, points };
 }

@@ -11,6 +11,8 @@ export interface FamilyTracePoint {
   xHalf: number;
   vyHalf: number;
   jacobi: number;
+  /** T/2 is this crossing of y = 0: the grids of this crossing count hold the member. */
+  halfCrossings: number;
 }
 
 interface GridAxes {
@@ -43,13 +45,16 @@ export class FamilyCoverage {
   }
 
   /** Marks the grid edges along the family's two curves in the (x0, C) grids. */
-  addFamily(members: readonly FamilyTracePoint[], halfCrossings: number): void {
+  addFamily(members: readonly FamilyTracePoint[]): void {
     const curves = [
-      members.map((m) => ({ x: m.x0, vy: m.vy0, jacobi: m.jacobi })),
-      members.map((m) => ({ x: m.xHalf, vy: m.vyHalf, jacobi: m.jacobi })),
+      members.map((m) => ({ x: m.x0, vy: m.vy0, jacobi: m.jacobi, k: m.halfCrossings })),
+      members.map((m) => ({ x: m.xHalf, vy: m.vyHalf, jacobi: m.jacobi, k: m.halfCrossings })),
     ];
     for (const curve of curves) {
-      for (let n = 0; n + 1 < curve.length; n++) this.markSegment(curve[n]!, curve[n + 1]!, halfCrossings);
+      for (let n = 0; n + 1 < curve.length; n++) {
+        const a = curve[n]!, b = curve[n + 1]!;
+        if (a.k === b.k) this.markSegment(a, b, a.k); // across a change of the count, neither grid holds the segment
+      }
     }
   }
 
