@@ -7,8 +7,10 @@
 //   the same levels with one thread as with two;
 // - membership holds at either perpendicular crossing: an orbit re-corrected from its other crossing
 //   (mirror theorem) is on the family, and so is one between members of a thinned family (refinement);
-// - stopped (Ctrl-C) after its first scan, it says so and stores nothing (common practice);
+// - stopped after its first scan (shouldStop), or by Ctrl-C through the bin (exit 130), it says so and
+//   stores nothing (common practice);
 // - bad arguments of audit and of generate --shard auto give one line and exit 2.
+import { spawn } from 'node:child_process';
 import { copyFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import Database from 'better-sqlite3';
@@ -33,6 +35,8 @@ import { runCommand } from './run-command.ts';
 
 const configPath = fileURLToPath(new URL('./fixtures/audit-catalog.yaml', import.meta.url));
 const tempPath = useTempCatalogDir();
+const REPO_ROOT = fileURLToPath(new URL('../../', import.meta.url));
+const BIN = fileURLToPath(new URL('../../bin/cycler-atlas.mjs', import.meta.url));
 const completePath = tempPath('complete.sqlite');
 const E1M1_FAMILY = 'earth-moon/E1M1/a';
 const LEVELS = '3';
@@ -106,6 +110,26 @@ describe('cycler-atlas audit', () => {
     const report = await auditCatalog({ dbPath: completePath, levelsPerSystem: 3, seed: 5, log: () => {}, shouldStop: () => polls++ > 0 });
     expect(report.interrupted).toBe(true);
     expect(report.auditId).toBeUndefined();
+    expect(storedAudits(completePath)).toHaveLength(before);
+  });
+
+  it.each(['1', '2'])('exits 130 on Ctrl-C (SIGINT) with %s worker(s), storing nothing', async (workers) => {
+    const before = storedAudits(completePath).length;
+    const child = spawn(process.execPath, [BIN, 'audit', '--db', completePath, '--levels', '200', '--seed', '3', '--workers', workers], { cwd: REPO_ROOT });
+    let stderr = '';
+    let stdout = '';
+    let interrupted = false;
+    child.stdout.on('data', (chunk: Buffer) => { stdout += chunk.toString(); });
+    child.stderr.on('data', (chunk: Buffer) => {
+      stderr += chunk.toString();
+      // Once the stored members are measured the scans are under way: interrupt them (once: a second
+      // Ctrl-C quits at once).
+      if (!interrupted && stderr.includes('stored members measured')) interrupted = child.kill('SIGINT');
+    });
+    const code = await new Promise<number | null>((resolve) => child.on('close', resolve));
+    expect(code, stdout + stderr).toBe(130);
+    expect(stderr).toContain('interrupt: stopping');
+    expect(stdout).toContain('nothing stored');
     expect(storedAudits(completePath)).toHaveLength(before);
   });
 
