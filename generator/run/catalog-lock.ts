@@ -3,14 +3,16 @@
 // it when the process ends in any way (Ctrl-C, kill -9, a crash), so a lock is never left stale. The
 // side file holds no data and is kept (removing it could let two runs lock two different files).
 import Database from 'better-sqlite3';
+import { realPathOf } from '../../catalog-db/same-file.ts';
 import { UsageError } from './command-line-values.ts';
 
 export type ReleaseLock = () => void;
 
 const RETRY_MS = 1000;
 
+/** Beside the real file, so that two spellings of one catalog (relative, absolute, a symlink) share it. */
 export function lockPathOf(dbPath: string): string {
-  return `${dbPath}.lock`;
+  return `${realPathOf(dbPath)}.lock`;
 }
 
 /** Takes the lock now, or returns null when another process holds it. */

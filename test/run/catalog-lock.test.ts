@@ -1,7 +1,7 @@
 // One generate per catalog at a time: a second one is refused (exit 2) or waits with --wait; a run
 // killed with SIGKILL leaves no stale lock. The summary line states what the file holds.
 import { spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync, symlinkSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -40,6 +40,17 @@ describe('catalog lock', () => {
       release();
     }
     expect(catalogChecksum(base)).toBe(before);
+  });
+
+  it('is shared by every spelling of one catalog: a symlink to it is held too', () => {
+    const link = join(dir, 'link.sqlite');
+    symlinkSync(base, link);
+    const release = tryLockCatalog(base)!;
+    try {
+      expect(tryLockCatalog(link)).toBeNull();
+    } finally {
+      release();
+    }
   });
 
   it('with --wait, starts once the other run lets go', async () => {
