@@ -2,7 +2,7 @@
 // each serving every lap-signature job of the system that scans there: the x-axis scan is the costly
 // part and the same for all of them, so it runs once per task (cached-scan.ts) and the run layer can
 // spread tasks over worker threads.
-import { auditContext, auditScan, type AuditOrbit, type LapSignatureJob } from './audit-scan.ts';
+import { auditContext, auditScan, type AuditOrbit, type LapSignatureJob, type ScreenCache } from './audit-scan.ts';
 import type { AxisSegment } from './family-job.ts';
 
 export interface AuditScanTask {
@@ -41,7 +41,8 @@ export function auditScanTasks(jobs: readonly LapSignatureJob[], levels: Readonl
 
 /** The orbits each of the task's jobs must find in the catalog, in the order of task.jobs. */
 export function runAuditScanTask(task: AuditScanTask): AuditOrbit[][] {
-  return task.jobs.map((job) => auditScan(auditContext(job, task.gridFactor), task.jacobi, task.segment, task.direction));
+  const screens: ScreenCache = new Map();
+  return task.jobs.map((job) => auditScan(auditContext(job, task.gridFactor), task.jacobi, task.segment, task.direction, screens));
 }
 
 export function taskLabel(task: AuditScanTask): string {

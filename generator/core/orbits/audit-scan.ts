@@ -65,13 +65,28 @@ export function auditContext(job: LapSignatureJob, gridFactor: number): AuditCon
   };
 }
 
+/**
+ * Laps and neck passages of scan roots, kept across the jobs of one scan task: the screen does not depend
+ * on the job (for the same tolerance), and every job of a system screens the same roots.
+ */
+export type ScreenCache = Map<SeedCandidate, { tolerance: string; screen: ReturnType<typeof screenOrbit> }>;
+
+function screened(context: AuditContext, c: SeedCandidate, cache?: ScreenCache): ReturnType<typeof screenOrbit> {
+  const tolerance = `${context.analysis.rtol},${context.analysis.atol}`;
+  const hit = cache?.get(c);
+  if (hit && hit.tolerance === tolerance) return hit.screen;
+  const screen = screenOrbit(context.analysis, c.x0, c.vy0, 2 * c.tHalfNd);
+  cache?.set(c, { tolerance, screen });
+  return screen;
+}
+
 const sameLaps = (a: LapCounts, b: LapCounts) => a.primaryLaps === b.primaryLaps && a.secondaryLaps === b.secondaryLaps;
 
 /** The candidate corrected and kept if it is an orbit the catalog must hold; null otherwise. */
-function catalogOrbitOf(context: AuditContext, c: SeedCandidate, direction: 1 | -1): AuditOrbit | null {
+function catalogOrbitOf(context: AuditContext, c: SeedCandidate, direction: 1 | -1, screens?: ScreenCache): AuditOrbit | null {
   const { job, analysis, corrector, laps } = context;
   const mu = job.system.mu;
-  const screen = screenOrbit(analysis, c.x0, c.vy0, 2 * c.tHalfNd);
+  const screen = screened(context, c, screens);
   if (screen.l1Passages === 0 || !sameLaps(screen.laps, laps)) return null;
   const corrected = correctAtFixedX0(mu, c.halfCrossings, c.x0, c.vy0, corrector);
   if (!corrected) return null;
@@ -87,12 +102,12 @@ function catalogOrbitOf(context: AuditContext, c: SeedCandidate, direction: 1 | 
   };
 }
 
-export function auditScan(context: AuditContext, jacobi: number, segment: AxisSegment, direction: 1 | -1): AuditOrbit[] {
+export function auditScan(context: AuditContext, jacobi: number, segment: AxisSegment, direction: 1 | -1, screens?: ScreenCache): AuditOrbit[] {
   const { job } = context;
   const candidates = cachedScan(job.system.mu, jacobi, segment, direction, job.seed.maxHalfCrossings, context.gridPoints, context.scan);
   return candidates.flatMap((c) => {
     try {
-      return catalogOrbitOf(context, c, direction) ?? [];
+      return catalogOrbitOf(context, c, direction, screens) ?? [];
     } catch {
       return []; // a propagation that fails (a collision) is no orbit of a catalog
     }
