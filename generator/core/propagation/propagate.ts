@@ -5,9 +5,10 @@ import { planarStmEquations } from '../cr3bp/equations-planar-stm.ts';
 import { spatialEquations } from '../cr3bp/equations-spatial.ts';
 import { spatialStmEquations } from '../cr3bp/equations-spatial-stm.ts';
 import { assertMassRatio } from '../cr3bp/lagrange-points.ts';
-import { IntegrationError, integrateDop853, type Dop853Workspace, type Rhs, type StepObserver } from '../dop853/index.ts';
+import { IntegrationError, integrateDop853, type Rhs } from '../dop853/index.ts';
 import type { EventHit, EventSpec } from '../events/event-spec.ts';
 import { EventLocator, toSpatialState } from '../events/event-locator.ts';
+import { CollisionWatch } from './collision-watch.ts';
 import { distanceToPrimary, distanceToSecondary } from './primary-distances.ts';
 import { workspaceFor } from './workspace-cache.ts';
 
@@ -42,22 +43,6 @@ export const DEFAULT_TOLERANCE = 1e-12;
 function equationsFor(mu: number, planar: boolean, stm: boolean): Rhs {
   if (planar) return stm ? planarStmEquations(mu) : planarEquations(mu);
   return stm ? spatialStmEquations(mu) : spatialEquations(mu);
-}
-
-class CollisionWatch implements StepObserver {
-  private readonly s = new Float64Array(6);
-  constructor(
-    private readonly mu: number, private readonly planar: boolean, private readonly radiusNd: number,
-    private readonly inner: StepObserver | null,
-  ) {}
-
-  afterStep(ws: Dop853Workspace, tOld: number, tNew: number): number {
-    const s = toSpatialState(ws.y, this.planar, this.s);
-    if (distanceToPrimary(this.mu, s) < this.radiusNd || distanceToSecondary(this.mu, s) < this.radiusNd) {
-      throw new IntegrationError(`trajectory hits a primary at t = ${tNew}`, 'collision', tNew);
-    }
-    return this.inner ? this.inner.afterStep(ws, tOld, tNew) : NaN;
-  }
 }
 
 export function propagate(mu: number, state0: ArrayLike<number>, durationNd: number, options: PropagateOptions = {}): PropagationResult {
