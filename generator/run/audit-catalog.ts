@@ -95,12 +95,12 @@ export async function auditCatalog(options: AuditOptions): Promise<AuditReport> 
   const progress = createRateProgress('audit: scans (level × segment × direction)', tasks.length, log);
   const poll = setInterval(() => options.shouldStop?.() && runner.stop(), 100);
   let interrupted = false;
+  let done = 0;
+  const results = tasks.map((task) => runner.run(task).then((found) => {
+    if (found) progress.step(++done, taskLabel(task));
+    return found;
+  }));
   try {
-    let done = 0;
-    const results = tasks.map((task) => runner.run(task).then((found) => {
-      if (found) progress.step(++done, taskLabel(task));
-      return found;
-    }));
     // Tallied in task order, so that the same seed gives the same audit whatever the timing.
     for (const [index, result] of results.entries()) {
       const found = await result;
@@ -110,6 +110,11 @@ export async function auditCatalog(options: AuditOptions): Promise<AuditReport> 
       }
       tasks[index].jobs.forEach((job, j) => tallies.get(job.key)!.add(found[j]));
     }
+  } catch (error) {
+    // The tasks still queued or running would fail with the pool's shutdown: only this error counts.
+    runner.stop();
+    for (const result of results) result.catch(() => undefined);
+    throw error;
   } finally {
     clearInterval(poll);
     await runner.destroy();

@@ -34,7 +34,12 @@ function refinedStretch(context: AuditContext, halfCrossings: number, a: StoredF
   const tangent: [number, number] = [dx / length, dv / length];
   const stretch: OrbitFootprint[] = [a];
   for (let i = 1; i < REFINE_SAMPLES; i++) {
-    const corrected = correctOnArc(mu, halfCrossings, [a.x0, a.vy0], tangent, (i * length) / REFINE_SAMPLES, context.corrector);
+    let corrected;
+    try {
+      corrected = correctOnArc(mu, halfCrossings, [a.x0, a.vy0], tangent, (i * length) / REFINE_SAMPLES, context.corrector);
+    } catch {
+      continue; // a trial orbit into a body: no sample there
+    }
     if (!corrected) continue;
     stretch.push({
       x0: corrected.x0, xHalf: corrected.shot.state[0], periodNd: 2 * corrected.shot.tHalfNd,
