@@ -47,9 +47,20 @@ export function createFamilyPool(threads: number): FamilyPool {
     threads,
     run(job, handlers, inputs = {}) {
       const { onProgress, onFamily } = typeof handlers === 'function' ? { onProgress: handlers, onFamily: undefined } : handlers;
-      return send<JobResult>({ kind: 'family', job, inputs }, (m) => {
-        if (m.type === 'progress') onProgress(m.progress);
-        else if (m.type === 'family') onFamily?.(m.bundle);
+      // A handler that throws (a family that cannot be written, e.g. on a full disk) fails this job once
+      // it ends, instead of escaping from the message listener as an uncaught exception.
+      let failure: { error: unknown } | undefined;
+      const result = send<JobResult>({ kind: 'family', job, inputs }, (m) => {
+        try {
+          if (m.type === 'progress') onProgress(m.progress);
+          else if (m.type === 'family') onFamily?.(m.bundle);
+        } catch (error) {
+          failure ??= { error };
+        }
+      });
+      return result.then((value) => {
+        if (failure !== undefined) throw failure.error;
+        return value;
       });
     },
     discover(request, onGrid) {
