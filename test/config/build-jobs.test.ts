@@ -1,5 +1,6 @@
-// buildJobs on the demo config: one job per entry in file order, stable keys, settings resolved
-// from the entry, then the config's defaults, then the built-in defaults.
+// buildJobs: on the demo config one job per entry in file order with stable keys, the same jobs as the
+// one-signature command; on a test config, settings resolved from the entry, then the config's
+// defaults, then the built-in defaults.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
@@ -8,6 +9,8 @@ import { loadConfig } from '../../generator/config/load-config.ts';
 import { singleFamilyConfig } from '../../generator/config/single-family-config.ts';
 import { systemJacobiBounds } from '../../generator/config/system-jacobi-bounds.ts';
 import { DEFAULT_LIMITS, DEFAULT_SEARCH, DEFAULT_TOLERANCE } from '../../generator/config/default-settings.ts';
+import { validateConfig } from '../../generator/config/validate-config.ts';
+import { validConfigObject } from './valid-config-object.ts';
 
 const demoPath = new URL('../../catalogs/demo.yaml', import.meta.url).pathname;
 
@@ -40,7 +43,7 @@ describe('buildJobs(demo config)', () => {
     expect(jobs[11]!.system.mu).toBeCloseTo(0.1085, 3);
   });
 
-  it('checks scan levels against C(L3) and C(L1) as tabulated in DESIGN.md', () => {
+  it('checks the equilibria against DESIGN.md and puts the discovery levels below C(L1)', () => {
     const bounds = systemJacobiBounds(jobs[0]!.system.mu);
     // C(L1) = 3.188341105, C(L3) = 3.012147149 (DESIGN.md; quintic roots for this μ).
     expect(bounds.l1).toBeCloseTo(3.188341105, 8);
@@ -48,33 +51,41 @@ describe('buildJobs(demo config)', () => {
     for (const job of jobs) {
       if (job.seed.kind !== 'lap-signature') continue;
       const b = systemJacobiBounds(job.system.mu);
-      for (const c of job.seed.jacobiValues) expect(c > b.l3 && c < b.l1).toBe(true);
+      for (const c of job.seed.jacobiValues) expect(c >= job.limits.jacobiMin && c < b.l1).toBe(true);
+    }
+  });
+
+  it('builds every lap-signature job of the demo exactly as the one-signature command does', () => {
+    // The demo uses the built-in discovery and continuation settings, so `generate --system earth-moon
+    // --signature X` runs the same job for X (only the screening's members per window differ).
+    for (const job of jobs.filter((j) => j.seed.kind === 'lap-signature' && j.system.id === 'earth-moon')) {
+      const signature = (job.seed as { signature: string }).signature;
+      const single = singleFamilyConfig({ system: 'earth-moon', signature });
+      const [alone] = buildJobs(single.config, single.configPath);
+      expect({ ...alone!, screening: undefined }).toEqual({ ...job, screening: undefined });
     }
   });
 
   it('takes each setting from the entry, else the config defaults, else the built-in defaults', () => {
-    const e1m1 = jobs[0]!;
-    expect(e1m1.seed).toEqual({
+    const config = validConfigObject();
+    config.families[0].maxHalfCrossings = 4;
+    delete config.defaults.search.gridPoints;
+    const built = buildJobs(validateConfig(config, 'test config'), 'test config');
+    expect(built[0]!.seed).toEqual({
       kind: 'lap-signature',
-      signature: 'E1M1',
-      jacobiValues: raw.defaults.search.jacobi,
-      segments: raw.defaults.search.segments,
-      directions: raw.defaults.search.directions,
-      maxHalfCrossings: raw.defaults.search.maxHalfCrossings,
-      gridPoints: raw.defaults.search.gridPoints,
+      signature: 'E2M1',
+      jacobiValues: [3.1, 3.15], // the entry's
+      segments: config.defaults.search.segments, // the config's defaults
+      directions: config.defaults.search.directions,
+      maxHalfCrossings: 4, // the entry's
+      gridPoints: DEFAULT_SEARCH.gridPoints, // built in
     });
-    expect(e1m1.limits).toMatchObject(raw.defaults.limits);
-    expect(e1m1.limits.jacobiMax).toBeCloseTo(3.188341105, 8); // built-in: C(L1), the neck closes above it
-    expect(e1m1.tolerance).toEqual(raw.tolerance);
-    expect(e1m1.indexTolerance).toBe(raw.indexTolerance);
-    const e3m3 = jobs[8]!;
-    expect(e3m3.seed.kind === 'lap-signature' && e3m3.seed.maxHalfCrossings).toBe(raw.families[8].maxHalfCrossings);
+    expect(built[0]!.limits).toMatchObject(config.defaults.limits);
+    expect(built[0]!.limits.jacobiMax).toBeCloseTo(3.188341105, 8); // built-in: C(L1), the neck closes above it
+    expect(built[3]!.seed.kind === 'lap-signature' && built[3]!.seed.jacobiValues).toEqual([3.3]);
     expect(jobs[9]!.seed).toEqual({ kind: 'lyapunov', point: 'L1', amplitudeNd: raw.families[9].amplitudeNd });
-    expect(jobs[9]!.limits.maxMembers).toBe(raw.families[9].limits.maxMembers);
     expect(jobs[9]!.name).toBe('L1 Lyapunov');
-    const pc = jobs[11]!;
-    expect(pc.name).toBe(raw.families[11].name);
-    expect(pc.seed.kind === 'lap-signature' && pc.seed.jacobiValues).toEqual(raw.families[11].jacobi);
+    expect(jobs[11]!.name).toBe(raw.families[11].name);
   });
 
   it('builds the one-family command-line config from the same built-in defaults', () => {
