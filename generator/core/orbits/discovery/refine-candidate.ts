@@ -12,8 +12,6 @@ export interface RefinedRoot {
   tHalfNd: number;
 }
 
-/** |ẋ| at the refined root below this: a true root, not a sign change across a jump. */
-const ROOT_RESIDUAL = 1e-4;
 /** An earlier crossing this close to perpendicular makes the orbit a multiple cover. */
 const EARLIER_PERPENDICULAR = 1e-6;
 
@@ -34,11 +32,15 @@ export function refineCandidate(mu: number, c: ZeroCandidate, o: ResidualOptions
   try {
     u = findRootBrent(residual, a, b, c.vxA, c.vxB, 1e-13 * Math.max(1, Math.abs(a)), 100 * o.rtol);
   } catch {
-    return null;
+    // The crossing is lost somewhere inside the edge (a tangency there): the interpolated root is still
+    // a start for Newton, which the corrector decides on.
+    const [x0, vy0, jacobi] = startAt(c.along === 'x' ? c.x0Guess : c.jacobiGuess);
+    return vy0 !== 0 ? { x0, vy0, jacobi, tHalfNd: c.tHalfGuessNd } : null;
   }
   const [x0, vy0, jacobi] = startAt(u);
   const check = halfCrossingResidual(mu, x0, vy0, c.halfCrossings, o);
-  if (!(Math.abs(check.vx) < ROOT_RESIDUAL)) return null;
   if (check.earlierVx.some((vx) => Math.abs(vx) < EARLIER_PERPENDICULAR)) return null;
-  return { x0, vy0, jacobi, tHalfNd: check.tNd };
+  // A residual left at the bracket's end is a jump or a root too steep for the loose tolerance: Newton
+  // with the STM, at the job's tolerance, tells the two apart.
+  return { x0, vy0, jacobi, tHalfNd: Number.isFinite(check.tNd) ? check.tNd : c.tHalfGuessNd };
 }
