@@ -1,12 +1,13 @@
 // Discovery for one x-axis segment and start direction: the residual grid over (x0, C) and the root
 // edges of its zero set. Every lap-signature job of a system with the same grid shares this result.
 import type { AxisSegment } from '../family-job.ts';
-import { segmentGrid } from '../scan-axis-segment.ts';
+import { segmentGrid, type ScanOptions } from '../scan-axis-segment.ts';
 import { computeResidualGrid, type GridProgress } from './residual-grid.ts';
 import type { ZeroCandidate } from './zero-candidate.ts';
 import { zeroSetCandidates } from './zero-set-candidates.ts';
 
-export interface DiscoveryRequest {
+/** One grid: the scan options (loose tolerance: signs, crossing times and laps only) plus its axes. */
+export interface DiscoveryRequest extends ScanOptions {
   mu: number;
   segment: AxisSegment;
   direction: 1 | -1;
@@ -15,15 +16,6 @@ export interface DiscoveryRequest {
   /** Jacobi levels of the grid, increasing. */
   levels: number[];
   maxHalfCrossings: number;
-  /** Loose: only signs, crossing times and lap counts are needed; Newton polishes later. */
-  rtol: number;
-  atol: number;
-  maxHalfTimeNd: number;
-  primaryRadiusNd: number;
-  secondaryRadiusNd: number;
-  xL1: number;
-  /** Largest distance from the nearer primary scanned on the far sides. */
-  reachNd: number;
 }
 
 export interface DiscoveryResult {
