@@ -1,9 +1,10 @@
 // Planar CR3BP with the 16 variational equations, Φ (4×4, row-major) in s[4..19].
+import { autonomousRhs } from '../dop853/autonomous-rhs.ts';
 import type { Rhs } from '../dop853/workspace.ts';
 
 export function planarStmEquations(mu: number): Rhs {
   const m1 = 1 - mu;
-  return (_t, s, d) => {
+  return autonomousRhs((_t, s, d) => {
     const x = s[0], y = s[1], vx = s[2], vy = s[3];
     const dx1 = x + mu, dx2 = x - m1;
     const y2 = y * y;
@@ -25,5 +26,5 @@ export function planarStmEquations(mu: number): Rhs {
       d[12 + j] = uxx * p0 + uxy * p1 + 2 * p3;
       d[16 + j] = uxy * p0 + uyy * p1 - 2 * p2;
     }
-  };
+  });
 }

@@ -1,9 +1,10 @@
 // Planar CR3BP (the z = 0 case of equations-spatial.ts). State x, y, vx, vy.
+import { autonomousRhs } from '../dop853/autonomous-rhs.ts';
 import type { Rhs } from '../dop853/workspace.ts';
 
 export function planarEquations(mu: number): Rhs {
   const m1 = 1 - mu;
-  return (_t, s, d) => {
+  return autonomousRhs((_t, s, d) => {
     const x = s[0], y = s[1], vx = s[2], vy = s[3];
     const dx1 = x + mu, dx2 = x - m1;
     const y2 = y * y;
@@ -13,5 +14,5 @@ export function planarEquations(mu: number): Rhs {
     d[1] = vy;
     d[2] = x + 2 * vy - a1 * dx1 - a2 * dx2;
     d[3] = y - 2 * vx - (a1 + a2) * y;
-  };
+  });
 }

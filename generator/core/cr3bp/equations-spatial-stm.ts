@@ -1,10 +1,11 @@
 // Spatial CR3BP with the 36 variational equations Φ' = A(t) Φ, A = [[0, I], [Ω_rr, 2J]], Φ row-major
 // in s[6..41] (common practice; Szebehely 1967 for the Hessian of Ω).
+import { autonomousRhs } from '../dop853/autonomous-rhs.ts';
 import type { Rhs } from '../dop853/workspace.ts';
 
 export function spatialStmEquations(mu: number): Rhs {
   const m1 = 1 - mu;
-  return (_t, s, d) => {
+  return autonomousRhs((_t, s, d) => {
     const x = s[0], y = s[1], z = s[2], vx = s[3], vy = s[4];
     const dx1 = x + mu, dx2 = x - m1;
     const yz2 = y * y + z * z;
@@ -35,5 +36,5 @@ export function spatialStmEquations(mu: number): Rhs {
       d[30 + j] = uxy * p0 + uyy * p1 + uyz * p2 - 2 * p3;
       d[36 + j] = uxz * p0 + uyz * p1 + uzz * p2;
     }
-  };
+  });
 }

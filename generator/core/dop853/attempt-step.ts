@@ -29,46 +29,48 @@ export function attemptStep(rhs: Rhs, ws: Dop853Workspace, t: number, h: number,
   const oY = SLOT_Y * n, oNew = SLOT_Y_NEW * n, oS = SLOT_STAGE * n;
   const o1 = SLOT_K1 * n, o2 = o1 + n, o3 = o2 + n, o4 = o3 + n, o5 = o4 + n, o6 = o5 + n;
   const o7 = o6 + n, o8 = o7 + n, o9 = o8 + n, o10 = o9 + n, o11 = o10 + n, o12 = o11 + n;
+  // An autonomous RHS gets the step's start time at every stage (autonomous-rhs.ts says why).
+  const timeless = rhs.autonomous === true;
   let i = 0;
   for (i = 0; i < n; i++) b[oS + i] = b[oY + i] + h * A21 * b[o1 + i];
-  rhs(t + C2 * h, s, ws.k2);
+  rhs(timeless ? t : t + C2 * h, s, ws.k2);
   for (i = 0; i < n; i++) b[oS + i] = b[oY + i] + h * (A31 * b[o1 + i] + A32 * b[o2 + i]);
-  rhs(t + C3 * h, s, ws.k3);
+  rhs(timeless ? t : t + C3 * h, s, ws.k3);
   for (i = 0; i < n; i++) b[oS + i] = b[oY + i] + h * (A41 * b[o1 + i] + A43 * b[o3 + i]);
-  rhs(t + C4 * h, s, ws.k4);
+  rhs(timeless ? t : t + C4 * h, s, ws.k4);
   for (i = 0; i < n; i++) b[oS + i] = b[oY + i] + h * (A51 * b[o1 + i] + A53 * b[o3 + i] + A54 * b[o4 + i]);
-  rhs(t + C5 * h, s, ws.k5);
+  rhs(timeless ? t : t + C5 * h, s, ws.k5);
   for (i = 0; i < n; i++) b[oS + i] = b[oY + i] + h * (A61 * b[o1 + i] + A64 * b[o4 + i] + A65 * b[o5 + i]);
-  rhs(t + C6 * h, s, ws.k6);
+  rhs(timeless ? t : t + C6 * h, s, ws.k6);
   for (i = 0; i < n; i++) {
     b[oS + i] = b[oY + i] + h * (A71 * b[o1 + i] + A74 * b[o4 + i] + A75 * b[o5 + i] + A76 * b[o6 + i]);
   }
-  rhs(t + C7 * h, s, ws.k7);
+  rhs(timeless ? t : t + C7 * h, s, ws.k7);
   for (i = 0; i < n; i++) {
     b[oS + i] = b[oY + i] + h * (A81 * b[o1 + i] + A84 * b[o4 + i] + A85 * b[o5 + i] + A86 * b[o6 + i]
       + A87 * b[o7 + i]);
   }
-  rhs(t + C8 * h, s, ws.k8);
+  rhs(timeless ? t : t + C8 * h, s, ws.k8);
   for (i = 0; i < n; i++) {
     b[oS + i] = b[oY + i] + h * (A91 * b[o1 + i] + A94 * b[o4 + i] + A95 * b[o5 + i] + A96 * b[o6 + i]
       + A97 * b[o7 + i] + A98 * b[o8 + i]);
   }
-  rhs(t + C9 * h, s, ws.k9);
+  rhs(timeless ? t : t + C9 * h, s, ws.k9);
   for (i = 0; i < n; i++) {
     b[oS + i] = b[oY + i] + h * (A101 * b[o1 + i] + A104 * b[o4 + i] + A105 * b[o5 + i] + A106 * b[o6 + i]
       + A107 * b[o7 + i] + A108 * b[o8 + i] + A109 * b[o9 + i]);
   }
-  rhs(t + C10 * h, s, ws.k10);
+  rhs(timeless ? t : t + C10 * h, s, ws.k10);
   for (i = 0; i < n; i++) {
     b[oS + i] = b[oY + i] + h * (A111 * b[o1 + i] + A114 * b[o4 + i] + A115 * b[o5 + i] + A116 * b[o6 + i]
       + A117 * b[o7 + i] + A118 * b[o8 + i] + A119 * b[o9 + i] + A1110 * b[o10 + i]);
   }
-  rhs(t + C11 * h, s, ws.k11);
+  rhs(timeless ? t : t + C11 * h, s, ws.k11);
   for (i = 0; i < n; i++) {
     b[oS + i] = b[oY + i] + h * (A121 * b[o1 + i] + A124 * b[o4 + i] + A125 * b[o5 + i] + A126 * b[o6 + i]
       + A127 * b[o7 + i] + A128 * b[o8 + i] + A129 * b[o9 + i] + A1210 * b[o10 + i] + A1211 * b[o11 + i]);
   }
-  rhs(t + h, s, ws.k12);
+  rhs(timeless ? t : t + h, s, ws.k12);
 
   let err5 = 0;
   let err3 = 0;

@@ -4,7 +4,9 @@
 // arrays. The named fields are views of that buffer, for the RHS and for callers.
 
 /** Right-hand side y' = f(t, y), written into dydt. Must not keep references to y or dydt. */
-export type Rhs = (t: number, y: Float64Array, dydt: Float64Array) => void;
+export type RhsFunction = (t: number, y: Float64Array, dydt: Float64Array) => void;
+/** A right-hand side, optionally marked as not depending on t (autonomous-rhs.ts). */
+export type Rhs = RhsFunction & { readonly autonomous?: boolean };
 
 /** Position (in units of n) of each vector in Dop853Workspace.buffer. */
 export const SLOT_Y = 0;
