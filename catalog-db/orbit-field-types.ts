@@ -17,9 +17,11 @@ export interface OrbitFieldSource {
 
 export type FieldValue = number | string | boolean | null;
 
-/** How a value reads: exact (shortest round-trip), significant digits, fixed decimals, whole percent. */
+/** How a value reads: exact (shortest round-trip), significant digits, fixed decimals, whole percent, a
+ *  stability index (site/lib/format-stability-index.ts: never rounded onto or across ±1). */
 export type FieldFormat =
   | { style: 'exact' }
+  | { style: 'index' }
   | { style: 'sig'; digits: number }
   | { style: 'fixed'; digits: number }
   | { style: 'percent' }

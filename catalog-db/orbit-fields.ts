@@ -2,6 +2,7 @@
 // and JSON), the orbit page's numbers and the catalog's CSV export. Adding a field: compute it, store it
 // (schema + row mapping), one entry here, a test. Order: the finder's columns and the catalog CSV's columns
 // (new catalog columns go last).
+import { memberLabel } from './member-label.ts';
 import type { OrbitField, OrbitFieldSource } from './orbit-field-types.ts';
 
 const STATE_NAMES = ['x0', 'y0', 'z0', 'vx0', 'vy0', 'vz0'] as const;
@@ -25,7 +26,7 @@ export const ORBIT_FIELDS: readonly OrbitField[] = [
   // Fields with catalogCsv: false are derived for the site; the catalog CSV keeps its columns as they were.
   field({
     key: 'orbit', label: 'Orbit', type: 'text', format: { style: 'text' }, csv: null, catalogCsv: false, finder: 'column', sort: 'catalog', link: true,
-    get: (s) => `${s.family.name} #${s.orbit.seq}`,
+    get: (s) => `${s.family.name} ${memberLabel(s.orbit.seq)}`,
   }),
   field({ key: 'systemId', label: 'System', type: 'text', format: { style: 'text' }, catalogCsv: false, finder: 'data', filter: { kind: 'choice', key: 'sys' }, get: (s) => s.system.id }),
   field({ key: 'systemName', label: 'System', type: 'text', format: { style: 'text' }, csv: null, catalogCsv: false, finder: 'column', get: (s) => s.system.name }),
@@ -51,11 +52,11 @@ export const ORBIT_FIELDS: readonly OrbitField[] = [
     get: (s) => (s.system.synodicPeriodDays === null ? null : s.orbit.periodDays / s.system.synodicPeriodDays),
   }),
   field({
-    key: 'stabilityIndex', label: 'In-plane index ν', format: { style: 'sig', digits: 10 }, finder: 'column', filter: { kind: 'absMax', key: 'nu' },
+    key: 'stabilityIndex', label: 'In-plane index ν', format: { style: 'index' }, finder: 'column', filter: { kind: 'absMax', key: 'nu' },
     sort: 'value', page: true, get: (s) => s.orbit.stabilityIndex,
   }),
   field({
-    key: 'verticalStabilityIndex', label: 'Vertical index ν_z', format: { style: 'sig', digits: 10 }, finder: 'column', sort: 'value', page: true,
+    key: 'verticalStabilityIndex', label: 'Vertical index ν_z', format: { style: 'index' }, finder: 'column', sort: 'value', page: true,
     get: (s) => s.orbit.verticalStabilityIndex,
   }),
   field({

@@ -1,5 +1,6 @@
 // Our chart look: two member classes told apart by colour AND shape (blue circles / orange triangles,
 // readable with the common colour-vision deficiencies), bifurcations in near-black diamonds and squares.
+import { formatStabilityIndex } from '../lib/format-stability-index.ts';
 import type { ChartMember } from './chart-input.ts';
 
 export const CHART_WIDTH = 520;
@@ -83,14 +84,16 @@ export function memberTooltip(secondaryName: string) {
   return [
     { field: 'seq', type: 'quantitative', title: 'member #' },
     { field: 'altKm', type: 'quantitative', title: `min. altitude above ${secondaryName} (km)`, format: ',.1f' },
-    { field: 'nu', type: 'quantitative', title: 'in-plane index ν', format: '.5~g' },
-    { field: 'nuV', type: 'quantitative', title: 'vertical index ν_z', format: '.5~g' },
+    { field: 'nuText', type: 'nominal', title: 'in-plane index ν' },
+    { field: 'nuVText', type: 'nominal', title: 'vertical index ν_z' },
     { field: 'jacobi', type: 'quantitative', title: 'Jacobi constant C', format: '.8~f' },
     { field: 'periodDays', type: 'quantitative', title: 'period (days)', format: '.4f' },
   ];
 }
 
-/** Member rows with the class the colour and shape read. */
+/** Member rows with the class the colour and shape read, and the indices as the pages write them. */
 export function memberValues(members: ChartMember[], stableOf: (m: ChartMember) => boolean) {
-  return members.map((m) => ({ ...m, cls: memberClass(stableOf(m)) }));
+  return members.map((m) => ({
+    ...m, cls: memberClass(stableOf(m)), nuText: formatStabilityIndex(m.nu), nuVText: formatStabilityIndex(m.nuV),
+  }));
 }

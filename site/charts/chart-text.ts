@@ -1,4 +1,5 @@
 // Text alternatives for the family charts: what a reader without the picture needs to know.
+import { formatStabilityIndex } from '../lib/format-stability-index.ts';
 import type { FamilyChartInput } from './chart-input.ts';
 
 const fmtKm = (v: number) => `${v.toLocaleString('en-US', { maximumFractionDigits: 0 })} km`;
@@ -31,12 +32,12 @@ function membersText(input: FamilyChartInput): string {
 
 export function stabilityChartText(input: FamilyChartInput): string {
   const stable = input.members.filter((m) => Math.abs(m.nu) < 1).length;
-  return `In-plane stability index against minimum altitude. ${membersText(input)}; ν ${span(input.members.map((m) => m.nu), fmtG)}; ${stable} member${stable === 1 ? '' : 's'} inside the band |ν| < 1. ${windowsText(input, 'alt')} ${bifurcationText(input, 'in-plane')}`;
+  return `In-plane stability index against minimum altitude. ${membersText(input)}; ν ${span(input.members.map((m) => m.nu), formatStabilityIndex)}; ${stable} member${stable === 1 ? '' : 's'} inside the band |ν| < 1. ${windowsText(input, 'alt')} ${bifurcationText(input, 'in-plane')}`;
 }
 
 export function verticalChartText(input: FamilyChartInput): string {
   const stable = input.members.filter((m) => Math.abs(m.nuV) < 1).length;
-  return `Vertical stability index against minimum altitude. ${membersText(input)}; ν_z ${span(input.members.map((m) => m.nuV), fmtG)}; ${stable} member${stable === 1 ? '' : 's'} with |ν_z| < 1. ${bifurcationText(input, 'vertical')}`;
+  return `Vertical stability index against minimum altitude. ${membersText(input)}; ν_z ${span(input.members.map((m) => m.nuV), formatStabilityIndex)}; ${stable} member${stable === 1 ? '' : 's'} with |ν_z| < 1. ${bifurcationText(input, 'vertical')}`;
 }
 
 export function jacobiChartText(input: FamilyChartInput): string {

@@ -1,5 +1,6 @@
 // Text alternative of the hold-radius chart: per stable window, how many members were screened and the
 // range of their hold radii, with the largest and where it sits.
+import { memberLabel } from '../../catalog-db/member-label.ts';
 import { panelLabel } from './hold-radius-chart.ts';
 import type { HoldRadiusChartInput, HoldRadiusPoint } from './hold-radius-input.ts';
 
@@ -18,7 +19,7 @@ export function holdRadiusChartText(input: HoldRadiusChartInput): string {
       const best = list.reduce((a, b) => (b.holdKm > a.holdKm ? b : a));
       const lo = Math.min(...list.map((p) => p.holdKm));
       const range = lo === best.holdKm ? km(lo) : `${km(lo)} to ${km(best.holdKm)}`;
-      return `${panelLabel(input, w)}, ${list.length} member${list.length === 1 ? '' : 's'}, hold radius ${range}, largest at member #${best.seq} (${km(best.altKm)} above ${input.family.secondaryName})`;
+      return `${panelLabel(input, w)}, ${list.length} member${list.length === 1 ? '' : 's'}, hold radius ${range}, largest at member ${memberLabel(best.seq)} (${km(best.altKm)} above ${input.family.secondaryName})`;
     });
   return `Hold radius against minimum altitude above ${input.family.secondaryName}, one panel per stable window, ${input.points.length} member${input.points.length === 1 ? '' : 's'} with a hold radius. ${parts.join('; ')}.`;
 }

@@ -1,5 +1,6 @@
 // The row of orbit shapes on a family page: up to `count` members spread evenly along the family.
 import type { OrbitRow, SystemRow } from '../../catalog-db/types.ts';
+import { memberLabel } from '../../catalog-db/member-label.ts';
 import { orbitHref } from './page-links.ts';
 import { THUMBNAIL_SAMPLES, plotSamples } from './plot-samples.ts';
 import { THUMBNAIL_FIGURE, trajectoryFigure, type TrajectoryFigure } from './trajectory-figures.ts';
@@ -27,6 +28,6 @@ export function familyThumbnails(members: OrbitRow[], system: SystemRow, count =
         secondaryName: system.secondaryName, primaryRadiusKm: system.primaryRadiusKm, secondaryRadiusKm: system.secondaryRadiusKm,
       }, 'rotating', THUMBNAIL_FIGURE)
       : null;
-    return { orbitId: orbit.id, href: orbitHref(orbit.id), label: `#${orbit.seq}, C ${orbit.jacobi.toFixed(4)}`, figure };
+    return { orbitId: orbit.id, href: orbitHref(orbit.id), label: `${memberLabel(orbit.seq)}, C ${orbit.jacobi.toFixed(4)}`, figure };
   });
 }

@@ -2,6 +2,7 @@
 // in the orbit-field table; a dash where there is no value.
 import type { FieldValue, OrbitField } from '../../catalog-db/orbit-field-types.ts';
 import { formatExact, formatFixed, formatPercent, formatSig } from './format-number.ts';
+import { formatStabilityIndex } from './format-stability-index.ts';
 
 const DASH = '—';
 
@@ -14,6 +15,7 @@ export function formatField(field: OrbitField, value: FieldValue, withUnit = fal
   else if (f.style === 'sig') text = formatSig(value, f.digits);
   else if (f.style === 'fixed') text = formatFixed(value, f.digits);
   else if (f.style === 'percent') text = formatPercent(value);
+  else if (f.style === 'index') text = formatStabilityIndex(value);
   else text = formatExact(value);
   return withUnit && field.unit !== null ? `${text} ${field.unit}` : text;
 }

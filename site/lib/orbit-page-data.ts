@@ -22,8 +22,7 @@ export interface OrbitPageData {
   periodNd: number;
   periodDays: number;
   periodS: number;
-  /** Position in the family: 1-based rank among the members and the member count. */
-  rank: number;
+  /** How many members the family has (the orbit's own number is its seq: catalog-db/member-label.ts). */
   memberCount: number;
   previous: NeighbourLink | null;
   next: NeighbourLink | null;
@@ -56,7 +55,6 @@ export function orbitPageData(catalog: CatalogSnapshot, orbitId: string): OrbitP
     periodNd: orbit.period,
     periodDays: orbit.periodDays,
     periodS: orbit.period * system.timeUnitS,
-    rank: index + 1,
     memberCount: members.length,
     previous: neighbour(members[index - 1]),
     next: neighbour(members[index + 1]),

@@ -82,7 +82,6 @@ describe('orbit page data', () => {
       km.forEach((v, i) => expect(v).toBeCloseTo(sqlKm[i], 9));
       expect(page.previous?.href ?? null).toBe(row.prev_id === null ? null : orbitHref(row.prev_id));
       expect(page.next?.href ?? null).toBe(row.next_id === null ? null : orbitHref(row.next_id));
-      expect(page.rank).toBe(row.rank);
       expect(page.memberCount).toBe(row.members);
       const file = initialStateFile(page);
       expect([file.state0Nd.x, file.state0Nd.y, file.state0Nd.z, file.state0Nd.vx, file.state0Nd.vy, file.state0Nd.vz]).toEqual(JSON.parse(row.state0));
