@@ -1,32 +1,12 @@
-// Our chart look: two member classes told apart by colour AND shape (blue circles / orange triangles,
-// readable with the common colour-vision deficiencies), bifurcations in near-black diamonds and squares.
+// Our chart look: sizes, fills, fonts, axis helpers and the member tooltip. The member classes (blue
+// circles / orange triangles, told apart by colour AND shape for the common colour-vision deficiencies;
+// bifurcations in near-black diamonds and squares) and what they mean per chart: chart-classes.ts.
 import { formatStabilityIndex } from '../lib/format-stability-index.ts';
+import type { ChartClasses } from './chart-classes.ts';
 import type { ChartMember } from './chart-input.ts';
 
 export const CHART_WIDTH = 520;
 export const CHART_HEIGHT = 280;
-
-export const CLASS_STABLE = 'stable';
-export const CLASS_UNSTABLE = 'unstable';
-export const CLASS_TANGENT = 'tangent bifurcation (ν = +1)';
-export const CLASS_DOUBLING = 'period-doubling bifurcation (ν = −1)';
-
-const classDomain = [CLASS_STABLE, CLASS_UNSTABLE, CLASS_TANGENT, CLASS_DOUBLING];
-
-export const classColor = {
-  field: 'cls',
-  type: 'nominal',
-  title: null,
-  scale: { domain: classDomain, range: ['#1f5fa8', '#c0661c', '#26262b', '#26262b'] },
-  legend: { orient: 'bottom', direction: 'horizontal', columns: 2, labelLimit: 320, symbolStrokeWidth: 1.5 },
-} as const;
-
-export const classShape = {
-  field: 'cls',
-  type: 'nominal',
-  title: null,
-  scale: { domain: classDomain, range: ['circle', 'triangle-up', 'diamond', 'square'] },
-} as const;
 
 export const BAND_FILL = '#dde8d3'; // |ν| < 1
 export const WINDOW_FILL = '#a9c8ea'; // stable windows
@@ -75,10 +55,6 @@ export function symlogTicks(values: number[]): number[] {
 export const SYMLOG_LABEL_EXPR =
   "abs(datum.value) >= 10000 ? replace(format(datum.value, '.0e'), 'e+', 'e') : format(datum.value, '~g')";
 
-export function memberClass(stable: boolean): string {
-  return stable ? CLASS_STABLE : CLASS_UNSTABLE;
-}
-
 /** Tooltip rows shared by every member layer. */
 export function memberTooltip(secondaryName: string) {
   return [
@@ -92,8 +68,8 @@ export function memberTooltip(secondaryName: string) {
 }
 
 /** Member rows with the class the colour and shape read, and the indices as the pages write them. */
-export function memberValues(members: ChartMember[], stableOf: (m: ChartMember) => boolean) {
+export function memberValues(members: ChartMember[], classes: ChartClasses) {
   return members.map((m) => ({
-    ...m, cls: memberClass(stableOf(m)), nuText: formatStabilityIndex(m.nu), nuVText: formatStabilityIndex(m.nuV),
+    ...m, cls: classes.stableOf(m) ? classes.stable : classes.unstable, nuText: formatStabilityIndex(m.nu), nuVText: formatStabilityIndex(m.nuV),
   }));
 }

@@ -1,9 +1,8 @@
 // Layers every family chart is made of: the |ν| < 1 band, stable-window columns, the family line in
 // member order, the members (clickable, with tooltips) and the bifurcation points.
 import type { ChartBifurcation, ChartMember, ChartWindow } from './chart-input.ts';
-import {
-  BAND_FILL, CLASS_DOUBLING, CLASS_TANGENT, FAMILY_LINE, WINDOW_FILL, classColor, classShape, memberTooltip, memberValues,
-} from './chart-style.ts';
+import { classColor, classShape, type ChartClasses } from './chart-classes.ts';
+import { BAND_FILL, FAMILY_LINE, WINDOW_FILL, memberTooltip, memberValues } from './chart-style.ts';
 
 /** A position channel: field name in the member rows plus the axis (title with units, scale). */
 export interface Channel {
@@ -47,31 +46,34 @@ export function familyLineLayer(members: ChartMember[], x: Channel, y: Channel) 
 }
 
 export function memberLayer(
-  members: ChartMember[], x: Channel, y: Channel, stableOf: (m: ChartMember) => boolean, secondaryName: string,
+  members: ChartMember[], x: Channel, y: Channel, classes: ChartClasses, secondaryName: string,
 ) {
   return {
-    data: { values: memberValues(members, stableOf) },
+    data: { values: memberValues(members, classes) },
     mark: { type: 'point', filled: true, size: 38, opacity: 1, cursor: 'pointer' },
     encoding: {
       x: q(x.field, x),
       y: q(y.field, y),
-      color: classColor,
-      shape: classShape,
+      color: classColor(classes),
+      shape: classShape(classes),
       href: { field: 'href', type: 'nominal' },
       tooltip: memberTooltip(secondaryName),
     },
   };
 }
 
-/** Bifurcation points at their own x, with y taken from `yOf` (e.g. ν = ±1 on the index charts). */
+/** Bifurcation points at their own x, with y taken from `yOf` (e.g. ν = ±1 on the index charts); null
+ *  when the chart draws none of them. */
 export function bifurcationLayer(
-  bifurcations: ChartBifurcation[], xField: keyof ChartBifurcation, x: Channel, y: Channel,
-  yOf: (b: ChartBifurcation) => number,
+  all: ChartBifurcation[], xField: keyof ChartBifurcation, x: Channel, y: Channel,
+  yOf: (b: ChartBifurcation) => number, classes: ChartClasses,
 ) {
+  const bifurcations = all.filter(classes.showsBifurcation);
+  if (bifurcations.length === 0) return null;
   return {
     data: {
       values: bifurcations.map((b) => ({
-        bx: b[xField], by: yOf(b), cls: b.kind === 'tangent' ? CLASS_TANGENT : CLASS_DOUBLING,
+        bx: b[xField], by: yOf(b), cls: b.kind === 'tangent' ? classes.tangent : classes.doubling,
         kind: b.kind, plane: b.plane, jacobi: b.jacobi, altKm: b.altKm, periodDays: b.periodDays,
       })),
     },
@@ -79,8 +81,8 @@ export function bifurcationLayer(
     encoding: {
       x: q('bx', x),
       y: q('by', y),
-      color: classColor,
-      shape: classShape,
+      color: classColor(classes),
+      shape: classShape(classes),
       tooltip: [
         { field: 'kind', title: 'bifurcation' },
         { field: 'plane', title: 'index' },

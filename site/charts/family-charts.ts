@@ -1,4 +1,5 @@
 // The four charts of a family page, in page order: key, heading, spec and text alternative.
+import { chartClasses, classLegendText, type ChartClasses } from './chart-classes.ts';
 import type { FamilyChartInput } from './chart-input.ts';
 import { jacobiChartText, periodChartText, stabilityChartText, verticalChartText } from './chart-text.ts';
 import { jacobiAltitudeChart } from './jacobi-altitude-chart.ts';
@@ -14,6 +15,8 @@ export interface FamilyChartSpec {
   key: FamilyChartKey;
   heading: string;
   text: string;
+  /** What the chart's colours and shapes mean (shown with it). */
+  legend: string;
   spec: Record<string, unknown>;
 }
 
@@ -22,16 +25,29 @@ export function familyChartSpecs(input: FamilyChartInput): FamilyChartSpec[] {
   const jacobiText = jacobiChartText(input);
   const periodText = periodChartText(input);
   const verticalText = verticalChartText(input);
+  const inPlane = chartClasses('in-plane', 'same');
+  const vertical = chartClasses('vertical', 'same');
+  const inPlaneAll = chartClasses('in-plane', 'all');
+  const windows = input.windows.length > 0;
+  const legend = (classes: ChartClasses, band: boolean, withWindows: boolean) =>
+    classLegendText(classes, { band, windows: withWindows, bifurcations: input.bifurcations.some(classes.showsBifurcation) });
   return [
-    { key: 'stability', heading: 'In-plane stability index ν', text: stabilityText, spec: indexAltitudeChart(input, stabilityText, 'in-plane') },
-    { key: 'jacobi', heading: 'Jacobi constant', text: jacobiText, spec: jacobiAltitudeChart(input, jacobiText) },
-    { key: 'period', heading: 'Period', text: periodText, spec: periodJacobiChart(input, periodText) },
-    { key: 'vertical', heading: 'Vertical stability index ν_z', text: verticalText, spec: indexAltitudeChart(input, verticalText, 'vertical') },
+    {
+      key: 'stability', heading: 'In-plane stability index ν', text: stabilityText, legend: legend(inPlane, true, windows),
+      spec: indexAltitudeChart(input, stabilityText, inPlane),
+    },
+    { key: 'jacobi', heading: 'Jacobi constant', text: jacobiText, legend: legend(inPlaneAll, false, windows), spec: jacobiAltitudeChart(input, jacobiText, inPlaneAll) },
+    { key: 'period', heading: 'Period', text: periodText, legend: legend(inPlaneAll, false, windows), spec: periodJacobiChart(input, periodText, inPlaneAll) },
+    {
+      key: 'vertical', heading: 'Vertical stability index ν_z', text: verticalText, legend: legend(vertical, true, false),
+      spec: indexAltitudeChart(input, verticalText, vertical),
+    },
   ];
 }
 
 /** The hold-radius chart of a family with screened members. */
 export function holdRadiusChartSpec(input: HoldRadiusChartInput): FamilyChartSpec {
   const text = holdRadiusChartText(input);
-  return { key: 'hold', heading: 'Hold radius across the stable windows', text, spec: holdRadiusChart(input, text) };
+  const legend = 'Blue dots: in-plane stable members with a hold radius, one panel per stable window; grey line: member order.';
+  return { key: 'hold', heading: 'Hold radius across the stable windows', text, legend, spec: holdRadiusChart(input, text) };
 }

@@ -2,6 +2,7 @@
 // (indices span 1e-1 to 1e8), with the |index| < 1 band, the bifurcations of that plane (tangent at +1,
 // period doubling at −1) and, for the in-plane index, the stable windows.
 import { altitudeChannel } from './altitude-channel.ts';
+import type { ChartClasses } from './chart-classes.ts';
 import type { FamilyChartInput } from './chart-input.ts';
 import { SYMLOG_LABEL_EXPR, symlogTicks } from './chart-style.ts';
 import { familyChartSpec } from './family-chart-spec.ts';
@@ -12,7 +13,8 @@ const PLANES = {
   vertical: { field: 'nuV', title: 'vertical index ν_z (symlog scale)' },
 } as const;
 
-export function indexAltitudeChart(input: FamilyChartInput, description: string, plane: 'in-plane' | 'vertical') {
+export function indexAltitudeChart(input: FamilyChartInput, description: string, classes: ChartClasses) {
+  const plane = classes.plane;
   const { field, title } = PLANES[plane];
   const indexOf = (m: FamilyChartInput['members'][number]) => m[field];
   const x = altitudeChannel(input);
@@ -22,13 +24,12 @@ export function indexAltitudeChart(input: FamilyChartInput, description: string,
     scale: { type: 'symlog', constant: 1 },
     axis: { values: symlogTicks(input.members.map(indexOf)), labelExpr: SYMLOG_LABEL_EXPR },
   };
-  const bifurcations = input.bifurcations.filter((b) => b.plane === plane);
   const windows = plane === 'in-plane' ? input.windows : [];
   return familyChartSpec(description, [
     bandLayer(y),
     windows.length > 0 ? windowLayer(windows, x, 'fromAltKm', 'toAltKm') : null,
     familyLineLayer(input.members, x, y),
-    memberLayer(input.members, x, y, (m) => Math.abs(indexOf(m)) < 1, input.secondaryName),
-    bifurcations.length > 0 ? bifurcationLayer(bifurcations, 'altKm', x, y, (b) => (b.kind === 'tangent' ? 1 : -1)) : null,
+    memberLayer(input.members, x, y, classes, input.secondaryName),
+    bifurcationLayer(input.bifurcations, 'altKm', x, y, (b) => (b.kind === 'tangent' ? 1 : -1), classes),
   ]);
 }

@@ -1,10 +1,11 @@
 // Jacobi constant C against minimum altitude above the smaller body, stable windows shaded.
 import { altitudeChannel } from './altitude-channel.ts';
+import type { ChartClasses } from './chart-classes.ts';
 import type { FamilyChartInput } from './chart-input.ts';
 import { familyChartSpec } from './family-chart-spec.ts';
 import { bifurcationLayer, familyLineLayer, memberLayer, windowLayer, type Channel } from './family-chart-layers.ts';
 
-export function jacobiAltitudeChart(input: FamilyChartInput, description: string) {
+export function jacobiAltitudeChart(input: FamilyChartInput, description: string, classes: ChartClasses) {
   const x = altitudeChannel(input);
   const y: Channel = {
     field: 'jacobi',
@@ -15,7 +16,7 @@ export function jacobiAltitudeChart(input: FamilyChartInput, description: string
   return familyChartSpec(description, [
     input.windows.length > 0 ? windowLayer(input.windows, x, 'fromAltKm', 'toAltKm') : null,
     familyLineLayer(input.members, x, y),
-    memberLayer(input.members, x, y, (m) => Math.abs(m.nu) < 1, input.secondaryName),
-    input.bifurcations.length > 0 ? bifurcationLayer(input.bifurcations, 'altKm', x, y, (b) => b.jacobi) : null,
+    memberLayer(input.members, x, y, classes, input.secondaryName),
+    bifurcationLayer(input.bifurcations, 'altKm', x, y, (b) => b.jacobi, classes),
   ]);
 }

@@ -1,9 +1,10 @@
 // Period in days against the Jacobi constant, stable windows shaded over their C range.
+import type { ChartClasses } from './chart-classes.ts';
 import type { FamilyChartInput } from './chart-input.ts';
 import { familyChartSpec } from './family-chart-spec.ts';
 import { bifurcationLayer, familyLineLayer, memberLayer, windowLayer, type Channel } from './family-chart-layers.ts';
 
-export function periodJacobiChart(input: FamilyChartInput, description: string) {
+export function periodJacobiChart(input: FamilyChartInput, description: string, classes: ChartClasses) {
   const x: Channel = {
     field: 'jacobi',
     title: 'Jacobi constant C (nondim.)',
@@ -18,7 +19,7 @@ export function periodJacobiChart(input: FamilyChartInput, description: string) 
   return familyChartSpec(description, [
     input.windows.length > 0 ? windowLayer(input.windows, x, 'fromJacobi', 'toJacobi') : null,
     familyLineLayer(input.members, x, y),
-    memberLayer(input.members, x, y, (m) => Math.abs(m.nu) < 1, input.secondaryName),
-    input.bifurcations.length > 0 ? bifurcationLayer(input.bifurcations, 'jacobi', x, y, (b) => b.periodDays) : null,
+    memberLayer(input.members, x, y, classes, input.secondaryName),
+    bifurcationLayer(input.bifurcations, 'jacobi', x, y, (b) => b.periodDays, classes),
   ]);
 }

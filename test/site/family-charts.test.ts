@@ -74,6 +74,33 @@ describe('family charts', () => {
     }
   });
 
+  it('each chart says what its colours mean, and the vertical-index chart colours and labels by |ν_z| < 1', async () => {
+    const family = catalog.families.find((f) => f.memberCount > 5)!;
+    const input = familyChartInput(catalog, family.id);
+    // a member stable in-plane but not vertically, and one the other way round (made up for this check)
+    const members = input.members.map((m, i) => (i === 0 ? { ...m, nu: 0.5, nuV: 3 } : i === 1 ? { ...m, nu: 3, nuV: 0.5 } : m));
+    const specs = familyChartSpecs({ ...input, members });
+    const byKey = Object.fromEntries(specs.map((s) => [s.key, s]));
+    const classOf = (key: string, seq: number) => {
+      const layers = byKey[key].spec.layer as Array<{ data?: { values?: Array<{ seq?: number; cls?: string; nu?: number }> } }>;
+      const rows = layers.flatMap((l) => l.data?.values ?? []).filter((v) => v.cls !== undefined && v.nu !== undefined);
+      return rows.find((v) => v.seq === seq)!.cls;
+    };
+    expect(classOf('vertical', members[0].seq)).toMatch(/^vertically unstable/);
+    expect(classOf('vertical', members[1].seq)).toMatch(/^vertically stable/);
+    for (const key of ['stability', 'jacobi', 'period']) {
+      expect(classOf(key, members[0].seq)).toMatch(/^in-plane stable/);
+      expect(classOf(key, members[1].seq)).toMatch(/^in-plane unstable/);
+    }
+    expect(byKey.vertical.legend).toContain('blue circles: vertically stable member (|ν_z| < 1)');
+    expect(byKey.vertical.legend).not.toMatch(/in-plane stable/);
+    expect(byKey.stability.legend).toContain('blue circles: in-plane stable member (|ν| < 1)');
+    // the picture's own legend uses the same words as the text beside it
+    const svg = (await renderChart(byKey.vertical.spec)).svg;
+    expect(svg).toContain('vertically stable member (|ν_z| &lt; 1)');
+    expect(svg).not.toContain('in-plane stable');
+  });
+
   it('the hold-radius chart of each screened family compiles, renders, links every screened member and places it in its window', async () => {
     let families = 0;
     for (const family of catalog.families) {

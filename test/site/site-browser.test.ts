@@ -355,6 +355,33 @@ describe('built site in chromium', () => {
     await page.close();
   });
 
+  it('eigenvalues and the other numbers of an orbit page fit their cells at 1280, 1366 and phone width', async () => {
+    // A stable member: its eigenvalues are complex (on the unit circle), the longest numbers on the page.
+    const id = screenedOrbit().orbit_id;
+    for (const [width, height] of [[1280, 800], [1366, 768], [375, 740]]) {
+      const ctx = await browser.newContext({ viewport: { width, height } });
+      const page = await open(orbitPath(id), ctx);
+      const eigenCount = await page.locator('#orbit-eigenvalues [data-eigenvalue]').count();
+      expect(eigenCount, 'four non-unit eigenvalues').toBe(4);
+      const overflows = await page.evaluate(() => {
+        const bad: string[] = [];
+        const viewport = document.documentElement.clientWidth;
+        for (const cell of Array.from(document.querySelectorAll('#orbit-numbers dd, #orbit-eigenvalues [data-eigenvalue]'))) {
+          const box = cell.getBoundingClientRect();
+          const row = (cell.parentElement as HTMLElement).getBoundingClientRect();
+          const text = (cell as HTMLElement).innerText;
+          if (box.right > row.right + 0.5 || box.left < row.left - 0.5) bad.push(`${text}: outside its row`);
+          if (box.right > viewport) bad.push(`${text}: past the page margin`);
+          if ((cell as HTMLElement).scrollWidth > (cell as HTMLElement).clientWidth + 1) bad.push(`${text}: wider than its box`);
+        }
+        return bad;
+      });
+      expect(overflows, `at ${width} px`).toEqual([]);
+      await page.locator('#orbit-eigenvalues').screenshot({ path: join(ARTIFACTS, `orbit-eigenvalues-${width}.png`) });
+      await ctx.close();
+    }
+  });
+
   it('no request left 127.0.0.1', () => {
     expect(requests.length).toBeGreaterThan(20);
     const outside = requests.filter((url) => !url.startsWith(site.origin) && !url.startsWith('data:') && !url.startsWith('blob:'));

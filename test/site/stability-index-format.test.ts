@@ -4,6 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import { ORBIT_FIELDS } from '../../catalog-db/orbit-fields.ts';
 import { seededRandom } from '../../generator/core/random/seeded-random.ts';
+import { chartClasses } from '../../site/charts/chart-classes.ts';
 import { memberValues } from '../../site/charts/chart-style.ts';
 import { formatField } from '../../site/lib/format-field.ts';
 import { formatStabilityIndex } from '../../site/lib/format-stability-index.ts';
@@ -21,7 +22,7 @@ describe('stability index text', () => {
     const row = finderRowHtml({ orbitId: 'x/0001', orbit: 'F #1', stabilityIndex: nu, verticalStabilityIndex: 1.0000000002 }, '/');
     expect(row).toContain('>-0.999999996<');
     expect(row).toContain('>1.0000000002<');
-    const [tooltip] = memberValues([{ id: 'x', seq: 1, href: '', altKm: 1, nu, nuV: -1.00000000007, jacobi: 3, periodDays: 1 }], () => true);
+    const [tooltip] = memberValues([{ id: 'x', seq: 1, href: '', altKm: 1, nu, nuV: -1.00000000007, jacobi: 3, periodDays: 1 }], chartClasses('in-plane', 'same'));
     expect([tooltip!.nuText, tooltip!.nuVText]).toEqual(['-0.999999996', '-1.0000000001']);
   });
 
