@@ -30,7 +30,9 @@ export function refineCandidate(mu: number, c: ZeroCandidate, o: ResidualOptions
   const [a, b] = c.along === 'x' ? [c.x0A, c.x0B] : [c.jacobiA, c.jacobiB];
   let u: number;
   try {
-    u = findRootBrent(residual, a, b, c.vxA, c.vxB, 1e-13 * Math.max(1, Math.abs(a)), 100 * o.rtol);
+    // To round-off in u (no early stop on a small residual): the seed then does not depend on the
+    // path Brent took, so bit-level changes elsewhere do not move the family's members.
+    u = findRootBrent(residual, a, b, c.vxA, c.vxB, 1e-14 * Math.max(1, Math.abs(a)));
   } catch {
     // The crossing is lost somewhere inside the edge (a tangency there): the interpolated root is still
     // a start for Newton, which the corrector decides on.
