@@ -35,13 +35,16 @@ export const ORBIT_FIELDS: readonly OrbitField[] = [
   field({ key: 'familyName', label: 'Family', type: 'text', format: { style: 'text' }, finder: 'data', get: (s) => s.family.name }),
   field({ key: 'orbitId', label: 'Orbit id', type: 'text', format: { style: 'text' }, finder: 'data', get: (s) => s.orbit.id }),
   field({ key: 'seq', label: 'Member', finder: 'data', get: (s) => s.orbit.seq }),
+  // The generator run that computed the family: the finder's exports name its version and tolerances.
+  field({ key: 'runId', label: 'Catalog run', catalogCsv: false, finder: 'data', get: (s) => s.family.runId }),
   field({ key: 'arclength', label: 'Arclength along family', format: { style: 'sig', digits: 8 }, page: true, get: (s) => s.orbit.arclength }),
-  ...STATE_NAMES.map((name, k) => field({ key: name, label: `${name} (start state)`, get: (s) => s.orbit.state0[k]! })),
+  // In the finder's data for its exports (which add the same state in km, km/s: site/scripts/finder/export-columns.ts).
+  ...STATE_NAMES.map((name, k) => field({ key: name, label: `${name} (start state)`, unit: k < 3 ? 'LU' : 'LU/TU', finder: 'data', get: (s) => s.orbit.state0[k]! })),
   field({
     key: 'jacobi', label: 'Jacobi constant C', finder: 'column', filter: { kind: 'range', minKey: 'cmin', maxKey: 'cmax' }, sort: 'value', page: true,
     get: (s) => s.orbit.jacobi,
   }),
-  field({ key: 'period', label: 'Period (model time)', unit: 'TU', page: true, get: (s) => s.orbit.period }),
+  field({ key: 'period', label: 'Period (model time)', unit: 'TU', finder: 'data', page: true, get: (s) => s.orbit.period }),
   field({
     key: 'periodDays', label: 'Period', unit: 'd', format: { style: 'fixed', digits: 6 }, finder: 'column',
     filter: { kind: 'range', minKey: 'pmin', maxKey: 'pmax' }, sort: 'value', page: true, get: (s) => s.orbit.periodDays,

@@ -20,5 +20,11 @@ export function finderData(catalog: CatalogSnapshot): FinderDataFile {
     const code = new Map(dict.map((text, i) => [text, i]));
     columns[field.key] = { dict, codes: values.map((v) => (v === null ? -1 : code.get(String(v))!)) };
   }
-  return { version: FINDER_DATA_VERSION, count: sources.length, columns };
+  const systems = catalog.systems.map(({ id, name, mu, lengthUnitKm, timeUnitS, primaryName, secondaryName, source }) => ({
+    id, name, mu, lengthUnitKm, timeUnitS, primaryName, secondaryName, source,
+  }));
+  const runs = catalog.runs.map(({ id, generatorVersion, gitCommit, scenarioName, rtol, atol, startedAt, finishedAt }) => ({
+    id, generatorVersion, gitCommit, scenarioName, rtol, atol, startedAt, finishedAt,
+  }));
+  return { version: FINDER_DATA_VERSION, count: sources.length, columns, systems, runs };
 }

@@ -1,5 +1,6 @@
 // The initial-state download of an orbit page (built into the page as a data: link, so it needs no script).
 import type { OrbitPageData } from './orbit-page-data.ts';
+import { STATE_KM_KEYS } from './state-units.ts';
 
 export function initialStateFile(page: OrbitPageData) {
   const { orbit, system, family } = page;
@@ -12,10 +13,7 @@ export function initialStateFile(page: OrbitPageData) {
     lengthUnitKm: system.lengthUnitKm,
     timeUnitS: system.timeUnitS,
     state0Nd: { x: page.state0Nd[0], y: page.state0Nd[1], z: page.state0Nd[2], vx: page.state0Nd[3], vy: page.state0Nd[4], vz: page.state0Nd[5] },
-    state0Km: {
-      xKm: page.state0Km.positionKm[0], yKm: page.state0Km.positionKm[1], zKm: page.state0Km.positionKm[2],
-      vxKmS: page.state0Km.velocityKmS[0], vyKmS: page.state0Km.velocityKmS[1], vzKmS: page.state0Km.velocityKmS[2],
-    },
+    state0Km: Object.fromEntries(STATE_KM_KEYS.map((key, k) => [key, [...page.state0Km.positionKm, ...page.state0Km.velocityKmS][k]])),
     periodNd: page.periodNd,
     periodDays: page.periodDays,
     jacobi: orbit.jacobi,

@@ -11,6 +11,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runExportState } from '../../generator/cli/commands/export-state.ts';
 import { idToPath } from '../../site/lib/id-path.ts';
+import { formatStabilityIndex } from '../../site/lib/format-stability-index.ts';
 import { queryToState } from '../../site/scripts/finder/finder-query.ts';
 import { buildSite, REPO_ROOT } from './build-site.ts';
 import { finderSql } from './finder-sql.ts';
@@ -101,7 +102,7 @@ describe('built site in chromium', () => {
       expect(await page.locator('#finder-count').getAttribute('data-count')).toBe(String(expected.length));
       const json = JSON.parse(await downloadText(page, () => page.click('#finder-json')));
       expect(json.orbits.map((o: { orbitId: string }) => o.orbitId)).toEqual(expected);
-      const csv = (await downloadText(page, () => page.click('#finder-csv'))).trim().split('\r\n');
+      const csv = (await downloadText(page, () => page.click('#finder-csv'))).trim().split('\r\n').filter((line) => !line.startsWith('#'));
       const idColumn = csv[0].split(',').indexOf('orbitId');
       expect(csv.slice(1).map((line) => line.split(',')[idColumn])).toEqual(expected);
       // the visible rows are the first ones of the same set
@@ -133,7 +134,7 @@ describe('built site in chromium', () => {
     expect(await field('jacobi')).toBe(String(row.jacobi));
     expect(await field('period')).toBe(`${row.period} TU`);
     expect(await field('periodDays')).toContain(Number(row.period_days).toFixed(6));
-    expect(await field('stabilityIndex')).toBe(String(Number(Number(row.stability_index).toPrecision(10))));
+    expect(await field('stabilityIndex')).toBe(formatStabilityIndex(Number(row.stability_index)));
     const state = await page.locator('#initial-state td[data-nd]').evaluateAll((cells) => cells.map((c) => Number((c as HTMLElement).innerText)));
     expect(state).toEqual(JSON.parse(String(row.state0)));
     expect(await page.locator('.plots svg path').count()).toBeGreaterThanOrEqual(6);
@@ -296,7 +297,7 @@ describe('built site in chromium', () => {
       expect(expected.length).toBeLessThan(expectIds('hmin=0').length);
       expect(await page.locator('#finder-count').getAttribute('data-count')).toBe(String(expected.length));
       expect(await page.inputValue('input[name="hmin"]')).toBe('300');
-      const csv = (await downloadText(page, () => page.click('#finder-csv'))).trim().split('\r\n');
+      const csv = (await downloadText(page, () => page.click('#finder-csv'))).trim().split('\r\n').filter((line) => !line.startsWith('#'));
       const header = csv[0].split(',');
       const col = (name: string) => header.indexOf(name);
       expect(col('holdRadiusKm')).toBeGreaterThan(0);
@@ -352,6 +353,74 @@ describe('built site in chromium', () => {
         expect(await page.locator('[data-role="download-note"]').innerText()).toMatch(new RegExp(`^${parsed.epochs.length} states`));
       }
     }
+    await page.close();
+  });
+
+  it("the finder's CSV and JSON open with the metadata (systems, μ, LU, TU, frame, run, tolerance)", async () => {
+    const page = await open('finder/?sys=earth-moon');
+    await page.waitForSelector('#finder[data-ready="true"]');
+    const csv = await downloadText(page, () => page.click('#finder-csv'));
+    const comments = csv.split('\r\n').filter((line) => line.startsWith('# '));
+    expect(csv.startsWith('# cycler-atlas orbit finder: ')).toBe(true);
+    expect(comments.some((c) => c.startsWith('# system earth-moon (Earth–Moon): mu = '))).toBe(true);
+    expect(comments.some((c) => /^# catalog run \d+: .*rtol = .*atol = /.test(c))).toBe(true);
+    const header = csv.split('\r\n').find((line) => !line.startsWith('#'))!.split(',');
+    expect(header).toEqual(expect.arrayContaining(['x0', 'vz0', 'xKm', 'vzKmS', 'period', 'periodDays']));
+    const json = JSON.parse(await downloadText(page, () => page.click('#finder-json')));
+    expect(json.systems.map((s: { id: string }) => s.id)).toEqual(['earth-moon']);
+    expect(json.runs.length).toBe(1);
+    expect(typeof json.orbits[0].vxKmS).toBe('number');
+    await page.close();
+  });
+
+  it('one member numbering: title, crumbs, position, neighbours, finder row, family table and chart tooltip agree', async () => {
+    const db = new Database(dbPath, { readonly: true });
+    const row = db.prepare("SELECT id, seq, family_id FROM orbits WHERE family_id = 'earth-moon/E1M1/a' AND seq = 7").get() as { id: string; seq: number; family_id: string };
+    const count = (db.prepare('SELECT count(*) AS n FROM orbits WHERE family_id = ?').get(row.family_id) as { n: number }).n;
+    db.close();
+    const numbers = (text: string) => [...text.matchAll(/#(\d+)/g)].map((m) => Number(m[1]));
+    const page = await open(orbitPath(row.id));
+    expect(numbers(await page.locator('h1').innerText())).toEqual([row.seq]);
+    expect(numbers(await page.locator('.crumbs').innerText())).toEqual([row.seq]);
+    const position = await page.locator('#member-position').innerText();
+    expect(numbers(position)[0]).toBe(row.seq);
+    expect(position).toContain(`of ${count}`);
+    expect(numbers(position).slice(1)).toEqual([0, count - 1]); // the first and last members as their own pages call themselves
+    expect(numbers(await page.locator('a[rel="prev"]').innerText())).toEqual([row.seq - 1]);
+    expect(numbers(await page.locator('a[rel="next"]').innerText())).toEqual([row.seq + 1]);
+    const first = await open(orbitPath(`${row.family_id}/0000`));
+    expect(numbers(await first.locator('h1').innerText())).toEqual([0]);
+    await first.close();
+    await page.close();
+
+    const finder = await open(`finder/?fam=${encodeURIComponent(row.family_id)}`);
+    await finder.waitForSelector('#finder[data-ready="true"]');
+    expect(numbers(await finder.locator(`#finder-rows tr[data-id="${row.id}"] td`).first().innerText())).toEqual([row.seq]);
+    await finder.close();
+
+    const family = await open(familyPath(row.family_id));
+    const link = family.locator(`#member-table a[href$="/${idToPath(row.id)}/"]`);
+    expect(numbers(await link.innerText())).toEqual([row.seq]);
+    await family.waitForSelector('[data-chart-key="stability"][data-interactive="true"]');
+    const points = family.locator('[data-chart-key="stability"] g.mark-symbol.role-mark path');
+    await points.nth(row.seq).hover();
+    await family.waitForSelector('#vg-tooltip-element.visible');
+    const tooltip = await family.locator('#vg-tooltip-element').innerText();
+    const seqInTooltip = Number(/member #\s*(\d+)/.exec(tooltip)?.[1]);
+    expect(Number.isInteger(seqInTooltip)).toBe(true);
+    // the point's page calls itself by the number its tooltip gave
+    await Promise.all([family.waitForURL(/\/orbit\//), points.nth(row.seq).click()]);
+    expect(numbers(await family.locator('h1').innerText())).toEqual([seqInTooltip]);
+    await family.close();
+  });
+
+  it('each family chart says what its colours mean; the vertical one by |ν_z| < 1', async () => {
+    const page = await open(familyPath('earth-moon/E1M1/a'));
+    const legend = (key: string) => page.locator(`figure:has([data-chart-key="${key}"]) [data-role="chart-legend"]`).innerText();
+    expect(await legend('vertical')).toMatch(/vertically stable member \(\|ν_z\| < 1\)/);
+    expect(await legend('vertical')).not.toMatch(/in-plane/);
+    expect(await legend('stability')).toMatch(/in-plane stable member \(\|ν\| < 1\)/);
+    expect(await page.locator('#family-charts').locator('xpath=preceding::p[1]').innerText()).not.toMatch(/Blue circles: in-plane stable/);
     await page.close();
   });
 

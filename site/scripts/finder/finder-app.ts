@@ -128,7 +128,7 @@ export async function startFinder(root: HTMLElement): Promise<void> {
     run(true);
   });
   root.querySelector('#finder-csv')!.addEventListener('click', () =>
-    saveTextFile('orbits-filtered.csv', 'text/csv', rowsToCsv(table, hits, hitCount)),
+    saveTextFile('orbits-filtered.csv', 'text/csv', rowsToCsv(table, hits, hitCount, stateToQuery(state))),
   );
   root.querySelector('#finder-json')!.addEventListener('click', () =>
     saveTextFile('orbits-filtered.json', 'application/json', rowsToJson(table, hits, hitCount, stateToQuery(state))),

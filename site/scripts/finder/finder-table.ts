@@ -2,7 +2,7 @@
 // one row read back as field values (for the row renderer and the exports).
 import type { FieldValue } from '../../../catalog-db/orbit-field-types.ts';
 import { FINDER_FIELDS } from '../../../catalog-db/orbit-fields.ts';
-import { FINDER_DATA_VERSION, type FinderDataFile } from '../../lib/finder-data-types.ts';
+import { FINDER_DATA_VERSION, type FinderDataFile, type FinderRunInfo, type FinderSystemInfo } from '../../lib/finder-data-types.ts';
 
 export interface TextColumn {
   dict: string[];
@@ -11,6 +11,8 @@ export interface TextColumn {
 
 export interface FinderTable {
   n: number;
+  systems: FinderSystemInfo[];
+  runs: FinderRunInfo[];
   /** Number and flag fields by key; NaN where the orbit has no value. */
   numbers: Record<string, Float64Array>;
   texts: Record<string, TextColumn>;
@@ -20,7 +22,7 @@ export function decodeFinderData(file: FinderDataFile): FinderTable {
   if (file.version !== FINDER_DATA_VERSION) {
     throw new Error(`finder data: version ${file.version} is not the expected ${FINDER_DATA_VERSION}`);
   }
-  const table: FinderTable = { n: file.count, numbers: {}, texts: {} };
+  const table: FinderTable = { n: file.count, systems: file.systems, runs: file.runs, numbers: {}, texts: {} };
   for (const [key, column] of Object.entries(file.columns)) {
     if ('dict' in column) table.texts[key] = { dict: column.dict, codes: Int32Array.from(column.codes) };
     else table.numbers[key] = Float64Array.from(column.values, (v) => (v === null ? NaN : v));
