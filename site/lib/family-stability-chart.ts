@@ -1,5 +1,6 @@
-// Each family's in-plane stability chart is rendered once per build and reused: inline on the family page,
-// as a shared SVG file on every member's page, with that member marked from the chart's own scales.
+// Each family's charts are rendered once per build and reused: the stability chart by every member's page
+// (a shared SVG file with that member marked from the chart's own scales), all of them by the family page
+// and by the chart files it references (chart-images/<family>/<key>.svg).
 import type { FamilyChartSpec } from '../charts/family-charts.ts';
 import { familyChartSpecs, holdRadiusChartSpec } from '../charts/family-charts.ts';
 import type { CatalogSnapshot } from './catalog-source.ts';
@@ -12,13 +13,16 @@ export interface RenderedFamilyChart extends FamilyChartSpec {
 }
 
 const stabilityCache = new Map<string, Promise<RenderedFamilyChart>>();
+const allCache = new Map<string, Promise<RenderedFamilyChart[]>>();
 
 function specsOf(catalog: CatalogSnapshot, familyId: string): FamilyChartSpec[] {
   return familyChartSpecs(familyChartInput(catalog, familyId));
 }
 
+const cacheKey = (catalog: CatalogSnapshot, familyId: string) => `${catalog.dbPath}\n${familyId}`;
+
 export function familyStabilityChart(catalog: CatalogSnapshot, familyId: string): Promise<RenderedFamilyChart> {
-  const key = `${catalog.dbPath}\n${familyId}`;
+  const key = cacheKey(catalog, familyId);
   let chart = stabilityCache.get(key);
   if (!chart) {
     const spec = specsOf(catalog, familyId).find((c) => c.key === 'stability')!;
@@ -28,15 +32,25 @@ export function familyStabilityChart(catalog: CatalogSnapshot, familyId: string)
   return chart;
 }
 
-/** The four charts of a family page (the stability one from the cache), and the hold-radius one when
- *  members were screened. */
-export async function familyCharts(catalog: CatalogSnapshot, familyId: string): Promise<RenderedFamilyChart[]> {
-  const stability = await familyStabilityChart(catalog, familyId);
+/** The family chart specs without rendering (for the specs file the browser loads). */
+export function familyChartSpecsOf(catalog: CatalogSnapshot, familyId: string): FamilyChartSpec[] {
   const holdInput = holdRadiusChartInput(catalog, familyId);
-  const others = [
-    ...specsOf(catalog, familyId).filter((c) => c.key !== 'stability'),
-    ...(holdInput ? [holdRadiusChartSpec(holdInput)] : []),
-  ];
-  const rendered = await Promise.all(others.map(async (c) => ({ ...c, rendered: await renderChart(c.spec) })));
-  return [stability, ...rendered];
+  return [...specsOf(catalog, familyId), ...(holdInput ? [holdRadiusChartSpec(holdInput)] : [])];
+}
+
+/** The four charts of a family page (the stability one from its cache), and the hold-radius one when
+ *  members were screened. */
+export function familyCharts(catalog: CatalogSnapshot, familyId: string): Promise<RenderedFamilyChart[]> {
+  const key = cacheKey(catalog, familyId);
+  let charts = allCache.get(key);
+  if (!charts) {
+    charts = (async () => {
+      const stability = await familyStabilityChart(catalog, familyId);
+      const others = familyChartSpecsOf(catalog, familyId).filter((c) => c.key !== 'stability');
+      const rendered = await Promise.all(others.map(async (c) => ({ ...c, rendered: await renderChart(c.spec) })));
+      return [stability, ...rendered];
+    })();
+    allCache.set(key, charts);
+  }
+  return charts;
 }

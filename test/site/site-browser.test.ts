@@ -65,6 +65,12 @@ async function downloadText(page: Page, click: () => Promise<void>): Promise<str
 }
 
 const orbitPath = (id: string) => `orbit/${idToPath(id)}/`;
+
+/** A family page's charts become interactive on the first pointer over them (the runtime loads then). */
+async function chartsMadeInteractive(page: Page, key: string): Promise<void> {
+  await page.locator('#family-charts .chart-host').first().hover();
+  await page.waitForSelector(`[data-chart-key="${key}"][data-interactive="true"]`);
+}
 const familyPath = (id: string) => `family/${idToPath(id)}/`;
 
 describe('built site in chromium', () => {
@@ -79,7 +85,7 @@ describe('built site in chromium', () => {
     for (const [name, path] of pages) {
       const page = await open(path);
       if (name === 'finder') await page.waitForSelector('#finder[data-ready="true"]');
-      if (name === 'family') await page.waitForSelector('[data-chart-key="stability"][data-interactive="true"]');
+      if (name === 'family') await chartsMadeInteractive(page, 'stability');
       await page.screenshot({ path: join(ARTIFACTS, `site-${name}.png`), fullPage: true });
       await page.close();
     }
@@ -192,7 +198,7 @@ describe('built site in chromium', () => {
 
   it('chart points show values on hover and open the orbit page on click', async () => {
     const page = await open(familyPath('earth-moon/E1M1/a'));
-    await page.waitForSelector('[data-chart-key="stability"][data-interactive="true"]');
+    await chartsMadeInteractive(page, 'stability');
     const point = page.locator('[data-chart-key="stability"] g.mark-symbol.role-mark path').first();
     await point.hover();
     await page.waitForSelector('#vg-tooltip-element.visible');
@@ -224,7 +230,12 @@ describe('built site in chromium', () => {
   it('reads fine with JavaScript off', async () => {
     const noScript = await browser.newContext({ javaScriptEnabled: false });
     const family = await open(familyPath('earth-moon/E1M1/a'), noScript);
-    expect(await family.locator('#family-charts .chart-host svg').count()).toBe(5); // four + hold radius
+    const pictures = family.locator('#family-charts .chart-host img');
+    expect(await pictures.count()).toBe(5); // four + hold radius
+    for (const img of await pictures.all()) {
+      await img.scrollIntoViewIfNeeded();
+      await expect.poll(() => img.evaluate((el) => (el as HTMLImageElement).complete && (el as HTMLImageElement).naturalWidth)).toBeGreaterThan(300);
+    }
     const screened = await open(orbitPath(screenedOrbit().orbit_id), noScript);
     expect(await screened.locator('#section-plot svg path').count()).toBeGreaterThan(3);
     const orbit = await open(orbitPath(arenstorfId), noScript);
@@ -270,7 +281,7 @@ describe('built site in chromium', () => {
 
   it('a family page charts the hold radius and lists its branch points of spatial families with working links', async () => {
     const page = await open(familyPath('earth-moon/E1M1/a'));
-    await page.waitForSelector('[data-chart-key="hold"][data-interactive="true"]');
+    await chartsMadeInteractive(page, 'hold');
     expect(await page.locator('[data-chart-key="hold"]').getAttribute('aria-label')).toMatch(/^Hold radius against minimum altitude/);
     const items = page.locator('#branch-point-list li');
     expect(await items.count()).toBe(2);
@@ -401,7 +412,7 @@ describe('built site in chromium', () => {
     const family = await open(familyPath(row.family_id));
     const link = family.locator(`#member-table a[href$="/${idToPath(row.id)}/"]`);
     expect(numbers(await link.innerText())).toEqual([row.seq]);
-    await family.waitForSelector('[data-chart-key="stability"][data-interactive="true"]');
+    await chartsMadeInteractive(family, 'stability');
     const points = family.locator('[data-chart-key="stability"] g.mark-symbol.role-mark path');
     await points.nth(row.seq).hover();
     await family.waitForSelector('#vg-tooltip-element.visible');
@@ -421,6 +432,23 @@ describe('built site in chromium', () => {
     expect(await legend('vertical')).not.toMatch(/in-plane/);
     expect(await legend('stability')).toMatch(/in-plane stable member \(\|ν\| < 1\)/);
     expect(await page.locator('#family-charts').locator('xpath=preceding::p[1]').innerText()).not.toMatch(/Blue circles: in-plane stable/);
+    await page.close();
+  });
+
+  it('a family page weighs at most 400 KB on first load and loads the chart runtime only on first interaction', async () => {
+    const bytes = new Map<string, number>();
+    const page = await context.newPage();
+    page.on('response', async (response) => {
+      const body = await response.body().catch(() => Buffer.alloc(0));
+      bytes.set(response.url(), body.length);
+    });
+    await page.goto(site.root + familyPath('earth-moon/E1M1/a'), { waitUntil: 'networkidle' });
+    const firstLoad = [...bytes.values()].reduce((a, b) => a + b, 0);
+    expect(firstLoad, [...bytes].map(([url, n]) => `${n} ${url}`).join('\n')).toBeLessThanOrEqual(400_000);
+    expect([...bytes.keys()].some((url) => url.includes('family-charts-client'))).toBe(false);
+    expect(await page.locator('#family-charts .chart-host img').count()).toBe(5);
+    await chartsMadeInteractive(page, 'stability');
+    expect([...bytes.keys()].some((url) => url.includes('family-charts-client'))).toBe(true);
     await page.close();
   });
 
