@@ -213,8 +213,8 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
  * convergence, another signature, a collision), before the rest of the piece is given up: bounds the
  * work on pieces that are one known family the coverage resolves poorly, or no family at all.
  */
-const MAX_KNOWN_TRIES_PER_PIECE = 12;
-const MAX_REJECTED_TRIES_PER_PIECE = 4;
+const MAX_KNOWN_TRIES_PER_PIECE = 40;
+const MAX_REJECTED_TRIES_PER_PIECE = 12;
 
 /** The job's own discovery grids, when the run layer did not compute them once for all jobs. */
 function discoverForJob(job: FamilyJob, hooks: JobHooks): DiscoveryResult[] | null {

@@ -63,8 +63,10 @@ export class FamilyCoverage {
   }
 
   /**
-   * Marks the grid edges the segment a–b crosses, and their neighbours along the same grid line (the
-   * family between two members is taken as straight; the neighbours absorb the error of that).
+   * Marks the grid edges the segment a–b crosses (the family between two members taken as straight).
+   * Only those: families crowd closer than the grid's spacing in places, so marking neighbouring edges
+   * too would hide other families' roots; an edge missed by the straight segment costs one correction
+   * that then finds the known family.
    */
   private markSegment(a: CurvePoint, b: CurvePoint, k: number): void {
     const id = gridOf(this.mu, a);
@@ -77,14 +79,14 @@ export class FamilyCoverage {
       if ((level - a.jacobi) * (level - b.jacobi) > 0 || a.jacobi === b.jacobi) return;
       const i = cellIndex(xs, a.x + ((level - a.jacobi) / (b.jacobi - a.jacobi)) * (b.x - a.x));
       if (i < 0) return;
-      for (let di = -1; di <= 1; di++) this.covered.add(edgeKey(id, k, 'x', i + di, j));
+      this.covered.add(edgeKey(id, k, 'x', i, j));
     });
     // Edges along C at each start point the segment crosses.
     xs.forEach((x, i) => {
       if ((x - a.x) * (x - b.x) > 0 || a.x === b.x) return;
       const j = cellIndex(levels, a.jacobi + ((x - a.x) / (b.x - a.x)) * (b.jacobi - a.jacobi));
       if (j < 0) return;
-      for (let dj = -1; dj <= 1; dj++) this.covered.add(edgeKey(id, k, 'jacobi', i, j + dj));
+      this.covered.add(edgeKey(id, k, 'jacobi', i, j));
     });
   }
 }
