@@ -28,8 +28,8 @@ export function chartClasses(plane: IndexPlane, bifurcations: 'same' | 'all'): C
   return {
     plane,
     stableOf: (m) => Math.abs(plane === 'in-plane' ? m.nu : m.nuV) < 1,
-    stable: `${word} stable member (|${nu}| < 1)`,
-    unstable: `${word} unstable member (|${nu}| > 1)`,
+    stable: `${word} stable (|${nu}| < 1)`,
+    unstable: `${word} unstable (|${nu}| > 1)`,
     tangent: `tangent bifurcation (${reached} = +1)`,
     doubling: `period-doubling bifurcation (${reached} = −1)`,
     showsBifurcation: (b) => bifurcations === 'all' || b.plane === plane,

@@ -47,3 +47,8 @@ export function jacobiChartText(input: FamilyChartInput): string {
 export function periodChartText(input: FamilyChartInput): string {
   return `Period against Jacobi constant. ${input.members.length} members; C ${span(input.members.map((m) => m.jacobi), fmtG)}; period ${span(input.members.map((m) => m.periodDays), (v) => `${v.toFixed(3)} days`)}. ${windowsText(input, 'jacobi')}`;
 }
+
+export function windowZoomText(input: FamilyChartInput): string {
+  const n = input.windows.length;
+  return `In-plane stability index close up on ${n === 1 ? 'the stable window' : `each of the ${n} stable windows`}, one panel each, the window and a quarter of its width either side. ${windowsText(input, 'alt')}`;
+}

@@ -23,7 +23,7 @@ const q = (field: string, channel: Channel) => ({
 export function bandLayer(y: Channel) {
   return {
     data: { values: [{ lo: -1, hi: 1 }] },
-    mark: { type: 'rect', fill: BAND_FILL, opacity: 0.9 },
+    mark: { type: 'rect', fill: BAND_FILL, opacity: 0.9, clip: true }, // the axis may end inside the band
     encoding: { y: q('lo', y), y2: { field: 'hi' } },
   };
 }

@@ -1,15 +1,16 @@
 // The four charts of a family page, in page order: key, heading, spec and text alternative.
 import { chartClasses, classLegendText, type ChartClasses } from './chart-classes.ts';
 import type { FamilyChartInput } from './chart-input.ts';
-import { jacobiChartText, periodChartText, stabilityChartText, verticalChartText } from './chart-text.ts';
+import { jacobiChartText, periodChartText, stabilityChartText, verticalChartText, windowZoomText } from './chart-text.ts';
 import { jacobiAltitudeChart } from './jacobi-altitude-chart.ts';
+import { windowZoomChart } from './window-zoom-chart.ts';
 import { periodJacobiChart } from './period-jacobi-chart.ts';
 import { indexAltitudeChart } from './index-altitude-chart.ts';
 import { holdRadiusChart } from './hold-radius-chart.ts';
 import type { HoldRadiusChartInput } from './hold-radius-input.ts';
 import { holdRadiusChartText } from './hold-radius-text.ts';
 
-export type FamilyChartKey = 'stability' | 'jacobi' | 'period' | 'vertical' | 'hold';
+export type FamilyChartKey = 'stability' | 'windows' | 'jacobi' | 'period' | 'vertical' | 'hold';
 
 export interface FamilyChartSpec {
   key: FamilyChartKey;
@@ -36,6 +37,10 @@ export function familyChartSpecs(input: FamilyChartInput): FamilyChartSpec[] {
       key: 'stability', heading: 'In-plane stability index ν', text: stabilityText, legend: legend(inPlane, true, windows),
       spec: indexAltitudeChart(input, stabilityText, inPlane),
     },
+    ...(windows ? [{
+      key: 'windows' as const, heading: 'Stable windows, close up', text: windowZoomText(input), legend: legend(inPlane, true, true),
+      spec: windowZoomChart(input, windowZoomText(input), inPlane),
+    }] : []),
     { key: 'jacobi', heading: 'Jacobi constant', text: jacobiText, legend: legend(inPlaneAll, false, windows), spec: jacobiAltitudeChart(input, jacobiText, inPlaneAll) },
     { key: 'period', heading: 'Period', text: periodText, legend: legend(inPlaneAll, false, windows), spec: periodJacobiChart(input, periodText, inPlaneAll) },
     {

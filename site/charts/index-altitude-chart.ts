@@ -4,7 +4,7 @@
 import { altitudeChannel } from './altitude-channel.ts';
 import type { ChartClasses } from './chart-classes.ts';
 import type { FamilyChartInput } from './chart-input.ts';
-import { SYMLOG_LABEL_EXPR, symlogTicks } from './chart-style.ts';
+import { SYMLOG_LABEL_EXPR, indexAxis } from './chart-style.ts';
 import { familyChartSpec } from './family-chart-spec.ts';
 import { bandLayer, bifurcationLayer, familyLineLayer, memberLayer, windowLayer, type Channel } from './family-chart-layers.ts';
 
@@ -18,11 +18,13 @@ export function indexAltitudeChart(input: FamilyChartInput, description: string,
   const { field, title } = PLANES[plane];
   const indexOf = (m: FamilyChartInput['members'][number]) => m[field];
   const x = altitudeChannel(input);
+  const axis = indexAxis(input.members.map(indexOf));
   const y: Channel = {
     field,
     title,
-    scale: { type: 'symlog', constant: 1 },
-    axis: { values: symlogTicks(input.members.map(indexOf)), labelExpr: SYMLOG_LABEL_EXPR },
+    // Domain from the data (and the ±1 band), padded a few pixels so no point sits on the frame.
+    scale: { type: 'symlog', constant: 1, domain: axis.domain, nice: false, padding: 8 },
+    axis: { values: axis.ticks, labelExpr: SYMLOG_LABEL_EXPR },
   };
   const windows = plane === 'in-plane' ? input.windows : [];
   return familyChartSpec(description, [

@@ -9,12 +9,14 @@ export function periodJacobiChart(input: FamilyChartInput, description: string, 
     field: 'jacobi',
     title: 'Jacobi constant C (nondim.)',
     scale: { type: 'linear', zero: false },
-    axis: { format: '.4~f' },
+    // few ticks, and vega drops labels that would overlap (long C labels collided)
+    axis: { format: '.4~f', tickCount: 5, labelOverlap: 'greedy', labelFlush: true },
   };
   const y: Channel = {
     field: 'periodDays',
     title: 'period (days)',
-    scale: { type: 'linear', zero: false },
+    scale: { type: 'linear', zero: false, padding: 8 },
+    axis: { tickCount: 6, labelOverlap: 'greedy' },
   };
   return familyChartSpec(description, [
     input.windows.length > 0 ? windowLayer(input.windows, x, 'fromJacobi', 'toJacobi') : null,

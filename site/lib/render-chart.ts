@@ -30,8 +30,9 @@ export async function renderChart(spec: Record<string, unknown>): Promise<Render
   const vegaSpec = compile(spec as any).spec;
   const view = new View(parse(vegaSpec), { renderer: 'none' });
   await view.runAsync();
-  // Two decimals are a hundredth of a pixel; vega writes up to 15, which doubled the file.
-  const svg = (await view.toSVG()).replace(/(\d\.\d\d)\d+/g, '$1');
+  // Two decimals are a hundredth of a pixel; vega writes up to 15, which doubled the file. Only inside
+  // tags (coordinates): the text between them is labels, where "0.992" must not become "0.99".
+  const svg = (await view.toSVG()).replace(/<[^>]+>/g, (tag) => tag.replace(/(\d\.\d\d)\d+/g, '$1'));
   view.finalize();
   const size = /<svg[^>]*\bwidth="([\d.]+)"[^>]*\bheight="([\d.]+)"/.exec(svg);
   // The plot area's origin is the first group translation (autosize padding + axis space).

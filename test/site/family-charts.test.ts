@@ -48,7 +48,8 @@ describe('family charts', () => {
     for (const family of catalog.families) {
       const input = familyChartInput(catalog, family.id);
       const specs = familyChartSpecs(input);
-      expect(specs.map((s) => s.key)).toEqual(['stability', 'jacobi', 'period', 'vertical']);
+      const zoom = input.windows.length > 0 ? ['windows'] : [];
+      expect(specs.map((s) => s.key)).toEqual(['stability', ...zoom, 'jacobi', 'period', 'vertical']);
       for (const chart of specs) {
         const warnings: string[] = [];
         compile(chart.spec as never, { logger: collectingLogger(warnings) as never });
@@ -60,7 +61,8 @@ describe('family charts', () => {
         expect(chart.text.length).toBeGreaterThan(40);
         // one clickable point per member, linked to the member's page
         const links = rendered.svg.match(/<a [^>]*href="[^"]*\/orbit\/[^"]*"/g) ?? [];
-        expect(links.length, `${family.id} ${chart.key}`).toBe(input.members.length);
+        if (chart.key !== 'windows') expect(links.length, `${family.id} ${chart.key}`).toBe(input.members.length);
+        else expect(links.length).toBeGreaterThan(0);
       }
       // marker of each member of the stability chart lies inside the SVG's frame
       const stability = await renderChart(specs[0].spec);
@@ -92,12 +94,12 @@ describe('family charts', () => {
       expect(classOf(key, members[0].seq)).toMatch(/^in-plane stable/);
       expect(classOf(key, members[1].seq)).toMatch(/^in-plane unstable/);
     }
-    expect(byKey.vertical.legend).toContain('blue circles: vertically stable member (|ν_z| < 1)');
+    expect(byKey.vertical.legend).toContain('blue circles: vertically stable (|ν_z| < 1)');
     expect(byKey.vertical.legend).not.toMatch(/in-plane stable/);
-    expect(byKey.stability.legend).toContain('blue circles: in-plane stable member (|ν| < 1)');
+    expect(byKey.stability.legend).toContain('blue circles: in-plane stable (|ν| < 1)');
     // the picture's own legend uses the same words as the text beside it
     const svg = (await renderChart(byKey.vertical.spec)).svg;
-    expect(svg).toContain('vertically stable member (|ν_z| &lt; 1)');
+    expect(svg).toContain('vertically stable (|ν_z| &lt; 1)');
     expect(svg).not.toContain('in-plane stable');
   });
 
@@ -180,6 +182,54 @@ describe('family charts', () => {
     expect(plot.figure.pointsD).toBe('');
     expect(plot.figure.xTicks.length).toBeGreaterThanOrEqual(2);
     expect(plot.text).toMatch(/No curve points are stored\.$/);
+  });
+
+  it('scales come from the data: collision approaches folded in, plain km ticks, a close-up per window, no point on the frame, no colliding labels', async () => {
+    // A made-up family (numbers invented for this check, shaped like a family that starts at a collision):
+    // altitudes from 2 m to 50,000 km, one stable window at 400–590 km, ν down to −2.7, ν_z just above 1.
+    const n = 120;
+    const members = Array.from({ length: n }, (_, i) => {
+      const altKm = 0.002 * (50_000 / 0.002) ** (i / (n - 1));
+      const inWindow = altKm >= 400 && altKm <= 590;
+      return {
+        id: `made-up/${i}`, seq: i, href: `/orbit/made-up/${i}/`, altKm,
+        nu: inWindow ? 0.5 : i % 7 === 0 ? -2.7 : 1 + altKm / 10, nuV: 0.99 + 0.0103 * (i / (n - 1)),
+        jacobi: 3.0 + 0.15 * (i / (n - 1)), periodDays: 12 + 20 * (i / (n - 1)),
+      };
+    });
+    const input = { secondaryName: 'Moon', members, windows: [{ fromAltKm: 400, toAltKm: 590, fromJacobi: 3.05, toJacobi: 3.06 }], bifurcations: [] };
+    const specs = Object.fromEntries(familyChartSpecs(input).map((s) => [s.key, s]));
+    const stability = await renderChart(specs.stability.spec);
+    const xAt = (altKm: number) => stability.project(altKm, 0)[0];
+    // nothing of the width goes to sub-kilometre approaches (the old log axis from 2 m gave them 37 %)
+    expect(xAt(1)).toBe(xAt(0.002));
+    expect(xAt(590) - xAt(400)).toBeGreaterThan(0.035 * (xAt(50_000) - xAt(0.002)));
+    const labels = (svg: string) => [...svg.matchAll(/role-axis-label[^]*?<\/g>/g)].flatMap((g) => [...g[0].matchAll(/<text[^>]*transform="translate\(([-\d.]+),([-\d.]+)\)"[^>]*>([^<]*)<\/text>/g)])
+      .map((m) => ({ x: Number(m[1]), y: Number(m[2]), text: m[3]! }));
+    for (const label of labels(stability.svg)) expect(label.text, 'no SI-prefixed ticks').not.toMatch(/[µmkM]$/);
+    // a tick below −1 where ν reaches −2.7
+    const yAxis = (specs.stability.spec.layer as Array<{ encoding: { y?: { axis?: { values?: number[] } } } }>)[0].encoding.y!.axis!.values!;
+    expect(yAxis.some((v) => v < -1 && v >= -2.7)).toBe(true);
+    // the close-up gives the window two thirds of its panel (a quarter of its width each side)
+    const panel = (specs.windows.spec as { concat: Array<{ layer: Array<{ encoding: { x?: { scale?: { domain?: [number, number] } } } }> }> }).concat[0]!;
+    const [lo, hi] = panel.layer.find((l) => l.encoding.x?.scale?.domain)!.encoding.x!.scale!.domain!;
+    expect((590 - 400) / (hi - lo)).toBeGreaterThan(0.6);
+    // the highest ν_z sits inside the plot, not on its top edge
+    const vertical = await renderChart(specs.vertical.spec);
+    const top = Number(/transform="translate\(([-\d.]+),([-\d.]+)\)"/.exec(vertical.svg)![2]);
+    const verticalTicks = labels(vertical.svg).filter((l) => l.x < 0).map((l) => l.text); // the y axis' labels, left of the plot
+    expect(verticalTicks.length).toBeGreaterThan(2);
+    expect(new Set(verticalTicks).size, verticalTicks.join(' ')).toBe(verticalTicks.length);
+    expect(vertical.project(members[n - 1]!.altKm, members[n - 1]!.nuV)[1] - top).toBeGreaterThanOrEqual(5);
+    // period chart: neighbouring x labels do not overlap (about 6 px per character at the 10 px axis font, common practice)
+    const period = await renderChart(specs.period.spec);
+    const rows = new Map<number, Array<{ x: number; text: string }>>();
+    for (const l of labels(period.svg)) rows.set(l.y, [...(rows.get(l.y) ?? []), l]);
+    const xLabels = [...rows.values()].sort((a, b) => b.length - a.length)[0]!.sort((a, b) => a.x - b.x);
+    expect(xLabels.length).toBeGreaterThan(2);
+    for (let i = 1; i < xLabels.length; i++) {
+      expect(xLabels[i]!.x - xLabels[i - 1]!.x, `${xLabels[i - 1]!.text} / ${xLabels[i]!.text}`).toBeGreaterThan(3 * (xLabels[i]!.text.length + xLabels[i - 1]!.text.length));
+    }
   });
 
   it('symlog ticks cover ν from 1e-1 to 1e8 with 0 and ±1 (the stable band edges)', () => {

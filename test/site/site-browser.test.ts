@@ -231,7 +231,7 @@ describe('built site in chromium', () => {
     const noScript = await browser.newContext({ javaScriptEnabled: false });
     const family = await open(familyPath('earth-moon/E1M1/a'), noScript);
     const pictures = family.locator('#family-charts .chart-host img');
-    expect(await pictures.count()).toBe(5); // four + hold radius
+    expect(await pictures.count()).toBe(6); // four, the window close-up and the hold radius
     for (const img of await pictures.all()) {
       await img.scrollIntoViewIfNeeded();
       await expect.poll(() => img.evaluate((el) => (el as HTMLImageElement).complete && (el as HTMLImageElement).naturalWidth)).toBeGreaterThan(300);
@@ -428,9 +428,9 @@ describe('built site in chromium', () => {
   it('each family chart says what its colours mean; the vertical one by |ν_z| < 1', async () => {
     const page = await open(familyPath('earth-moon/E1M1/a'));
     const legend = (key: string) => page.locator(`figure:has([data-chart-key="${key}"]) [data-role="chart-legend"]`).innerText();
-    expect(await legend('vertical')).toMatch(/vertically stable member \(\|ν_z\| < 1\)/);
+    expect(await legend('vertical')).toMatch(/vertically stable \(\|ν_z\| < 1\)/);
     expect(await legend('vertical')).not.toMatch(/in-plane/);
-    expect(await legend('stability')).toMatch(/in-plane stable member \(\|ν\| < 1\)/);
+    expect(await legend('stability')).toMatch(/in-plane stable \(\|ν\| < 1\)/);
     expect(await page.locator('#family-charts').locator('xpath=preceding::p[1]').innerText()).not.toMatch(/Blue circles: in-plane stable/);
     await page.close();
   });
@@ -446,7 +446,7 @@ describe('built site in chromium', () => {
     const firstLoad = [...bytes.values()].reduce((a, b) => a + b, 0);
     expect(firstLoad, [...bytes].map(([url, n]) => `${n} ${url}`).join('\n')).toBeLessThanOrEqual(400_000);
     expect([...bytes.keys()].some((url) => url.includes('family-charts-client'))).toBe(false);
-    expect(await page.locator('#family-charts .chart-host img').count()).toBe(5);
+    expect(await page.locator('#family-charts .chart-host img').count()).toBe(6);
     await chartsMadeInteractive(page, 'stability');
     expect([...bytes.keys()].some((url) => url.includes('family-charts-client'))).toBe(true);
     await page.close();
