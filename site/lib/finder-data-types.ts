@@ -4,31 +4,17 @@
 // Shared by the build (which writes it) and the browser (which reads it into typed arrays); in site/lib so
 // that site/scripts imports site/lib and never the other way round.
 
+import type { RunRow, SystemRow } from '../../catalog-db/types.ts';
+
 export const FINDER_DATA_VERSION = 4;
 
 /** What an export says about a system: its id and name, μ, units and where they come from. */
-export interface FinderSystemInfo {
-  id: string;
-  name: string;
-  mu: number;
-  lengthUnitKm: number;
-  timeUnitS: number;
-  primaryName: string;
-  secondaryName: string;
-  source: string;
-}
+export const FINDER_SYSTEM_KEYS = ['id', 'name', 'mu', 'lengthUnitKm', 'timeUnitS', 'primaryName', 'secondaryName', 'source'] as const;
+export type FinderSystemInfo = Pick<SystemRow, (typeof FINDER_SYSTEM_KEYS)[number]>;
 
 /** What an export says about a catalog run: version, commit, scenario, integrator tolerances, dates. */
-export interface FinderRunInfo {
-  id: number;
-  generatorVersion: string;
-  gitCommit: string;
-  scenarioName: string;
-  rtol: number;
-  atol: number;
-  startedAt: string;
-  finishedAt: string | null;
-}
+export const FINDER_RUN_KEYS = ['id', 'generatorVersion', 'gitCommit', 'scenarioName', 'rtol', 'atol', 'startedAt', 'finishedAt'] as const;
+export type FinderRunInfo = Pick<RunRow, (typeof FINDER_RUN_KEYS)[number]>;
 
 export type FinderColumnData = { values: Array<number | null> } | { dict: string[]; codes: number[] };
 

@@ -3,7 +3,7 @@
 // selects in SQLite).
 import { FINDER_FIELDS } from '../../catalog-db/orbit-fields.ts';
 import type { FieldValue, OrbitFieldSource } from '../../catalog-db/orbit-field-types.ts';
-import { FINDER_DATA_VERSION, type FinderColumnData, type FinderDataFile } from './finder-data-types.ts';
+import { FINDER_DATA_VERSION, FINDER_RUN_KEYS, FINDER_SYSTEM_KEYS, type FinderColumnData, type FinderDataFile } from './finder-data-types.ts';
 import type { CatalogSnapshot } from './catalog-source.ts';
 import { orbitFieldSource } from './orbit-field-source.ts';
 
@@ -20,11 +20,11 @@ export function finderData(catalog: CatalogSnapshot): FinderDataFile {
     const code = new Map(dict.map((text, i) => [text, i]));
     columns[field.key] = { dict, codes: values.map((v) => (v === null ? -1 : code.get(String(v))!)) };
   }
-  const systems = catalog.systems.map(({ id, name, mu, lengthUnitKm, timeUnitS, primaryName, secondaryName, source }) => ({
-    id, name, mu, lengthUnitKm, timeUnitS, primaryName, secondaryName, source,
-  }));
-  const runs = catalog.runs.map(({ id, generatorVersion, gitCommit, scenarioName, rtol, atol, startedAt, finishedAt }) => ({
-    id, generatorVersion, gitCommit, scenarioName, rtol, atol, startedAt, finishedAt,
-  }));
+  const systems = catalog.systems.map((s) => pick(s, FINDER_SYSTEM_KEYS));
+  const runs = catalog.runs.map((r) => pick(r, FINDER_RUN_KEYS));
   return { version: FINDER_DATA_VERSION, count: sources.length, columns, systems, runs };
+}
+
+function pick<T, K extends keyof T>(row: T, keys: readonly K[]): Pick<T, K> {
+  return Object.fromEntries(keys.map((key) => [key, row[key]])) as Pick<T, K>;
 }
