@@ -1,6 +1,7 @@
 // One shot of the symmetric-orbit corrector: from the perpendicular start (x0, 0, 0, 0, vy0, 0) to the
 // k-th crossing of y = 0, with the planar STM (mirror theorem, Roy & Ovenden 1955; Howell 1984).
 import { propagate } from '../propagation/propagate.ts';
+import { IntegrationError } from '../dop853/index.ts';
 import { yAxisCrossing } from '../events/y-axis-crossing.ts';
 import type { EventSpec } from '../events/event-spec.ts';
 
@@ -34,10 +35,17 @@ function crossingEvents(halfCrossings: number): EventSpec[] {
   return events;
 }
 
+/** Null when the crossing is not reached: time limit, or a trajectory into a body (a Newton iterate can stray there). */
 export function halfPeriodShot(mu: number, x0: number, vy0: number, halfCrossings: number, options: ShotOptions): HalfPeriodShot | null {
-  const result = propagate(mu, [x0, 0, 0, vy0], options.maxTimeNd, {
-    rtol: options.rtol, atol: options.atol, stm: true, events: crossingEvents(halfCrossings),
-  });
+  let result;
+  try {
+    result = propagate(mu, [x0, 0, 0, vy0], options.maxTimeNd, {
+      rtol: options.rtol, atol: options.atol, stm: true, events: crossingEvents(halfCrossings),
+    });
+  } catch (error) {
+    if (error instanceof IntegrationError) return null;
+    throw error;
+  }
   if (!result.terminated) return null;
   const hits = result.events;
   const last = hits[hits.length - 1];
