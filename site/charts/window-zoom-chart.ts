@@ -17,7 +17,20 @@ export function zoomSpanKm(w: ChartWindow): [number, number] {
   return [Math.max(0, lo - margin), hi + margin];
 }
 
+/** The Jacobi-constant span the same window's zoom shows (for charts with C along x). */
+export function zoomSpanJacobi(w: ChartWindow): [number, number] {
+  const lo = Math.min(w.fromJacobi, w.toJacobi);
+  const hi = Math.max(w.fromJacobi, w.toJacobi);
+  const margin = Math.max((hi - lo) * ZOOM_MARGIN, 1e-9);
+  return [lo - margin, hi + margin];
+}
+
 const km = (v: number) => Math.round(v).toLocaleString('en-US');
+
+/** "window 1: 400–590 km" (the zoom buttons and the close-up panels). */
+export function windowZoomLabel(w: ChartWindow, index: number): string {
+  return `window ${index + 1}: ${km(Math.min(w.fromAltKm, w.toAltKm))}–${km(Math.max(w.fromAltKm, w.toAltKm))} km`;
+}
 
 export function windowZoomChart(input: FamilyChartInput, description: string, classes: ChartClasses) {
   const columns = Math.min(2, input.windows.length);
@@ -27,7 +40,7 @@ export function windowZoomChart(input: FamilyChartInput, description: string, cl
     const members = input.members.filter((m) => m.altKm >= lo && m.altKm <= hi);
     const x: Channel = {
       field: 'altKm',
-      title: `window ${i + 1}: ${km(Math.min(w.fromAltKm, w.toAltKm))}–${km(Math.max(w.fromAltKm, w.toAltKm))} km above ${input.secondaryName}`,
+      title: `${windowZoomLabel(w, i)} above ${input.secondaryName}`,
       scale: { type: 'linear', domain: [lo, hi], nice: false, zero: false },
       axis: { format: ',~r', tickCount: 4, labelFlush: true, labelOverlap: 'greedy' },
     };

@@ -13,6 +13,8 @@ import { orbitPageData } from '../../site/lib/orbit-page-data.ts';
 import { holdRadiusChartInput } from '../../site/lib/hold-radius-chart-input.ts';
 import { sectionPlotOf } from '../../site/lib/section-plot-of-orbit.ts';
 import { symlogTicks } from '../../site/charts/chart-style.ts';
+import { zoomSpanJacobi, zoomSpanKm } from '../../site/charts/window-zoom-chart.ts';
+import { zoomAxisOf, zoomSpec } from '../../site/charts/zoom-spec.ts';
 import { readCatalogSnapshot, type CatalogSnapshot } from '../../site/lib/catalog-source.ts';
 import { familyChartInput } from '../../site/lib/family-chart-input.ts';
 import { renderChart } from '../../site/lib/render-chart.ts';
@@ -230,6 +232,28 @@ describe('family charts', () => {
     for (let i = 1; i < xLabels.length; i++) {
       expect(xLabels[i]!.x - xLabels[i - 1]!.x, `${xLabels[i - 1]!.text} / ${xLabels[i]!.text}`).toBeGreaterThan(3 * (xLabels[i]!.text.length + xLabels[i - 1]!.text.length));
     }
+  });
+
+  it('zooming a chart onto a stable window gives the window most of the width and leaves the spec as it was', async () => {
+    const family = catalog.families.find((f) => (catalog.windowsByFamily.get(f.id) ?? []).length > 0)!;
+    const input = familyChartInput(catalog, family.id);
+    const specs = Object.fromEntries(familyChartSpecs(input).map((s) => [s.key, s.spec]));
+    expect([zoomAxisOf(specs.stability), zoomAxisOf(specs.jacobi), zoomAxisOf(specs.vertical), zoomAxisOf(specs.period), zoomAxisOf(specs.windows)])
+      .toEqual(['altKm', 'altKm', 'altKm', 'jacobi', null]);
+    const w = [...input.windows].sort((a, b) => Math.abs(b.toAltKm - b.fromAltKm) - Math.abs(a.toAltKm - a.fromAltKm))[0]!; // the widest
+    expect(Math.abs(w.toAltKm - w.fromAltKm)).toBeGreaterThan(10);
+    const before = JSON.stringify(specs.stability);
+    const zoomed = await renderChart(zoomSpec(specs.stability, zoomSpanKm(w)));
+    expect(JSON.stringify(specs.stability)).toBe(before);
+    const [lo, hi] = zoomSpanKm(w);
+    const share = (zoomed.project(Math.max(w.fromAltKm, w.toAltKm), 0)[0] - zoomed.project(Math.min(w.fromAltKm, w.toAltKm), 0)[0])
+      / (zoomed.project(hi, 0)[0] - zoomed.project(lo, 0)[0]);
+    expect(share).toBeGreaterThan(0.6);
+    const full = await renderChart(specs.stability);
+    const fullShare = (full.project(Math.max(w.fromAltKm, w.toAltKm), 0)[0] - full.project(Math.min(w.fromAltKm, w.toAltKm), 0)[0]) / full.width;
+    expect(share).toBeGreaterThan(fullShare);
+    const period = await renderChart(zoomSpec(specs.period, zoomSpanJacobi(w)));
+    expect(period.svg).toContain('</svg>');
   });
 
   it('symlog ticks cover ν from 1e-1 to 1e8 with 0 and ±1 (the stable band edges)', () => {

@@ -452,6 +452,36 @@ describe('built site in chromium', () => {
     await page.close();
   });
 
+  it("a family page's zoom buttons redraw the charts over one stable window and back; hidden without JavaScript", async () => {
+    const page = await open(familyPath('earth-moon/E1M1/a'));
+    const buttons = page.locator('#chart-zoom button[data-zoom]');
+    expect(await buttons.count()).toBeGreaterThan(1);
+    const label = await buttons.nth(1).innerText(); // "window 1: 400–433 km"
+    const [lo, hi] = /: ([\d,]+)–([\d,]+) km/.exec(label)!.slice(1).map((v) => Number(v.replaceAll(',', '')));
+    await buttons.nth(1).click();
+    const stability = page.locator('[data-chart-key="stability"]');
+    await expect.poll(() => stability.getAttribute('data-zoom')).toBe('0');
+    // the x-axis labels of the zoomed chart lie around the window (a quarter of its width either side, rounded)
+    const xLabels = await stability.evaluate((host) => {
+      // the x axis' labels are the row of axis labels lowest in the chart
+      const labels = Array.from(host.querySelectorAll('g.role-axis-label text')).map((t) => ({ top: Math.round(t.getBoundingClientRect().top), text: t.textContent ?? '' }));
+      const bottom = Math.max(...labels.map((l) => l.top));
+      return labels.filter((l) => l.top === bottom).map((l) => l.text);
+    });
+    const ticks = xLabels.map((t) => Number(t.replaceAll(',', ''))).filter(Number.isFinite);
+    expect(ticks.length).toBeGreaterThan(1);
+    const margin = Math.max((hi! - lo!) * 0.25, 0.5) + 1;
+    for (const t of ticks) expect(t >= lo! - margin && t <= hi! + margin, `${t} in ${label}`).toBe(true);
+    expect(await page.locator('[data-chart-key="period"]').getAttribute('data-zoom')).toBe('0');
+    await buttons.nth(0).click();
+    await expect.poll(() => stability.getAttribute('data-zoom')).toBe('family');
+    await page.close();
+    const noScript = await browser.newContext({ javaScriptEnabled: false });
+    const still = await open(familyPath('earth-moon/E1M1/a'), noScript);
+    expect(await still.locator('#chart-zoom').isVisible()).toBe(false);
+    await noScript.close();
+  });
+
   it('eigenvalues and the other numbers of an orbit page fit their cells at 1280, 1366 and phone width', async () => {
     // A stable member: its eigenvalues are complex (on the unit circle), the longest numbers on the page.
     const id = screenedOrbit().orbit_id;
