@@ -3,19 +3,14 @@
 // spans thousands), the hold-radius axis shared so the windows compare; points linked to the members' pages.
 import { CHART_HEIGHT, CHART_WIDTH, FAMILY_LINE, chartConfig } from './chart-style.ts';
 import type { HoldRadiusChartInput } from './hold-radius-input.ts';
+import { windowLabel, windowSpanLabel } from './window-label.ts';
 
 export const HOLD_POINT_COLOR = '#1f5fa8';
-
-const km = (v: number) => Math.round(v).toLocaleString('en-US');
-
-export function windowLabel(window: number | null): string {
-  return window === null ? 'outside the listed windows' : `window ${window + 1}`;
-}
 
 /** Panel title: the window and its altitude span (from the window rows). */
 export function panelLabel(input: HoldRadiusChartInput, window: number | null): string {
   const w = window === null ? undefined : input.family.windows[window];
-  return w ? `${windowLabel(window)}: ${km(Math.min(w.fromAltKm, w.toAltKm))}–${km(Math.max(w.fromAltKm, w.toAltKm))} km` : windowLabel(window);
+  return w ? windowSpanLabel(w, window!) : windowLabel(window);
 }
 
 export function holdRadiusChart(input: HoldRadiusChartInput, description: string) {

@@ -4,6 +4,7 @@
 import type { ChartClasses } from './chart-classes.ts';
 import type { ChartWindow, FamilyChartInput } from './chart-input.ts';
 import { CHART_HEIGHT, CHART_WIDTH, SYMLOG_LABEL_EXPR, chartConfig, indexAxis } from './chart-style.ts';
+import { windowSpanLabel } from './window-label.ts';
 import { bandLayer, bifurcationLayer, familyLineLayer, memberLayer, windowLayer, type Channel } from './family-chart-layers.ts';
 
 /** Each side of a window, as a fraction of its width, shown around it. */
@@ -25,12 +26,6 @@ export function zoomSpanJacobi(w: ChartWindow): [number, number] {
   return [lo - margin, hi + margin];
 }
 
-const km = (v: number) => Math.round(v).toLocaleString('en-US');
-
-/** "window 1: 400–590 km" (the zoom buttons and the close-up panels). */
-export function windowZoomLabel(w: ChartWindow, index: number): string {
-  return `window ${index + 1}: ${km(Math.min(w.fromAltKm, w.toAltKm))}–${km(Math.max(w.fromAltKm, w.toAltKm))} km`;
-}
 
 export function windowZoomChart(input: FamilyChartInput, description: string, classes: ChartClasses) {
   const columns = Math.min(2, input.windows.length);
@@ -40,7 +35,7 @@ export function windowZoomChart(input: FamilyChartInput, description: string, cl
     const members = input.members.filter((m) => m.altKm >= lo && m.altKm <= hi);
     const x: Channel = {
       field: 'altKm',
-      title: `${windowZoomLabel(w, i)} above ${input.secondaryName}`,
+      title: `${windowSpanLabel(w, i)} above ${input.secondaryName}`,
       scale: { type: 'linear', domain: [lo, hi], nice: false, zero: false },
       axis: { format: ',~r', tickCount: 4, labelFlush: true, labelOverlap: 'greedy' },
     };

@@ -8,7 +8,7 @@ import { familyChartInput } from '../../../lib/family-chart-input.ts';
 import type { FamilyChartsFile } from '../../../lib/family-charts-file.ts';
 import { familyChartSpecsOf } from '../../../lib/family-stability-chart.ts';
 import { idToPath } from '../../../lib/id-path.ts';
-import { windowZoomLabel } from '../../../charts/window-zoom-chart.ts';
+import { windowSpanLabel } from '../../../charts/window-label.ts';
 
 export const getStaticPaths = (() =>
   loadCatalog().families.map((f) => ({ params: { path: `${idToPath(f.id)}/specs.json` }, props: { familyId: f.id } }))) satisfies GetStaticPaths;
@@ -19,7 +19,7 @@ export const GET: APIRoute = ({ props }) => {
   const input = familyChartInput(catalog, familyId);
   const file: FamilyChartsFile = {
     specs: Object.fromEntries(familyChartSpecsOf(catalog, familyId).map((c) => [c.key, c.spec])),
-    windows: input.windows.map((w, i) => ({ label: windowZoomLabel(w, i), altKm: zoomSpanKm(w), jacobi: zoomSpanJacobi(w) })),
+    windows: input.windows.map((w, i) => ({ label: windowSpanLabel(w, i), altKm: zoomSpanKm(w), jacobi: zoomSpanJacobi(w) })),
   };
   return new Response(JSON.stringify(file), { headers: { 'Content-Type': 'application/json' } });
 };
