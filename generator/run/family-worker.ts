@@ -11,7 +11,9 @@ import { runFamilyJob } from '../core/orbits/run-family-job.ts';
 export type WorkerMessage =
   | { type: 'progress'; progress: JobProgress }
   | { type: 'family'; bundle: FamilyBundle }
-  | { type: 'grid'; pointsDone: number; points: number };
+  | { type: 'grid'; pointsDone: number; points: number }
+  /** The task's last message: everything before it has been posted. */
+  | { type: 'end' };
 
 interface TaskBase {
   progressPort: MessagePort;
@@ -49,6 +51,7 @@ export default function runWorkerTask(task: FamilyTask | DiscoveryTask): JobResu
       shouldStop,
     }, task.inputs);
   } finally {
+    post({ type: 'end' });
     progressPort.close();
   }
 }

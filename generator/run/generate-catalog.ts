@@ -1,7 +1,7 @@
 // `generate`: runs the jobs of a catalog config on a worker pool and writes what they yield.
 // Provenance goes into a run row; finished jobs are skipped (resume); this shard's jobs only.
 import { openCatalogForRead, openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
-import type { CatalogWriter } from '../../catalog-db/types.ts';
+import type { CatalogWriter, RunRow } from '../../catalog-db/types.ts';
 import { buildJobs, configSystems } from '../config/build-jobs.ts';
 import { loadConfig, type LoadedConfig } from '../config/load-config.ts';
 import type { FamilyJob } from '../core/orbits/family-job.ts';
@@ -79,7 +79,7 @@ export async function generateFromConfig(loaded: LoadedConfig, options: Generate
     if (fromConfigFile || !earlier.hasScenario) {
       writer.setScenario({ name: config.scenario.name, team: config.scenario.team, description: config.scenario.description });
     }
-    const runId = writer.startRun({
+    const run = {
       generatorVersion: generatorVersion(),
       gitCommit: gitCommit(),
       configHash,
@@ -89,8 +89,10 @@ export async function generateFromConfig(loaded: LoadedConfig, options: Generate
       rtol: config.tolerance.rtol,
       atol: config.tolerance.atol,
       shard: formatShard(shard),
-      startedAt: new Date().toISOString(),
-    });
+    };
+    const resumed = resumableRun(earlier.latest, run);
+    if (resumed) log(`run ${resumed.id} was stopped; going on under it`);
+    const runId = resumed ? resumed.id : writer.startRun({ ...run, startedAt: new Date().toISOString() });
     const pending = orderJobsByCost(jobs.filter((job) => !writer.jobDone(job.key)));
     const summary: GenerateSummary = {
       runId,
@@ -203,12 +205,23 @@ function chooseDisplay(mode: 'auto' | 'bars' | 'lines', log: (line: string) => v
 }
 
 /** What the catalog already holds (the writer has created the file by now). */
-function readEarlierState(dbPath: string): { hasScenario: boolean; latestRunId: number | null; latestConfigHash: string | null } {
+function readEarlierState(dbPath: string): { hasScenario: boolean; latestRunId: number | null; latestConfigHash: string | null; latest: RunRow | null } {
   const reader = openCatalogForRead(dbPath);
   try {
     const latest = reader.runs()[0];
-    return { hasScenario: reader.scenario() !== null, latestRunId: latest?.id ?? null, latestConfigHash: latest?.configHash ?? null };
+    return { hasScenario: reader.scenario() !== null, latestRunId: latest?.id ?? null, latestConfigHash: latest?.configHash ?? null, latest: latest ?? null };
   } finally {
     reader.close();
   }
+}
+
+/**
+ * A stopped run that this one simply continues (same config text, shard, generator version and commit):
+ * resuming goes on under its row instead of leaving it unfinished beside a new one.
+ */
+function resumableRun(latest: RunRow | null, run: Omit<RunRow, 'id' | 'finishedAt' | 'startedAt'>): RunRow | null {
+  if (!latest || latest.finishedAt !== null) return null;
+  const same = latest.configHash === run.configHash && latest.shard === run.shard
+    && latest.generatorVersion === run.generatorVersion && latest.gitCommit === run.gitCommit;
+  return same ? latest : null;
 }

@@ -24,6 +24,9 @@ export interface FamilyPool {
   destroy(): Promise<void>;
 }
 
+/** How long a finished task's last messages may lag behind its result before the port is closed anyway. */
+const END_MESSAGE_WAIT_MS = 5_000;
+
 export function defaultWorkerCount(): number {
   return availableParallelism();
 }
@@ -37,11 +40,21 @@ export function createFamilyPool(threads: number): FamilyPool {
     // Workers are reused across jobs: each keeps its integrator workspaces warm.
     idleTimeout: 60_000,
   });
-  const send = <T>(task: Omit<FamilyTask, 'progressPort' | 'stopFlag'> | Omit<DiscoveryTask, 'progressPort' | 'stopFlag'>, onMessage: (m: WorkerMessage) => void): Promise<T> => {
+  const send = async <T>(task: Omit<FamilyTask, 'progressPort' | 'stopFlag'> | Omit<DiscoveryTask, 'progressPort' | 'stopFlag'>, onMessage: (m: WorkerMessage) => void): Promise<T> => {
     const channel = new MessageChannel();
-    channel.port1.on('message', onMessage);
+    // The task's result comes back on tinypool's own channel and can overtake the last messages on this
+    // port: the worker's 'end' message, its last one, tells when every message has been handled.
+    let ended!: () => void;
+    const allHandled = new Promise<void>((resolve) => { ended = resolve; });
+    channel.port1.on('message', (m: WorkerMessage) => (m.type === 'end' ? ended() : onMessage(m)));
     const full = { ...task, progressPort: channel.port2, stopFlag };
-    return (pool.run(full, { transferList: [channel.port2] }) as Promise<T>).finally(() => channel.port1.close());
+    try {
+      const result = (await pool.run(full, { transferList: [channel.port2] })) as T;
+      await Promise.race([allHandled, new Promise((resolve) => setTimeout(resolve, END_MESSAGE_WAIT_MS))]);
+      return result;
+    } finally {
+      channel.port1.close();
+    }
   };
   return {
     threads,

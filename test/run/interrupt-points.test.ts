@@ -2,11 +2,13 @@
 // stopped with SIGINT or SIGKILL at several points of a job — during the discovery grid, while a family
 // is continued, while its stable members are screened, and after its first family is written — then run
 // again to the end; every resumed catalog must equal one uninterrupted run (families, orbit states to
-// 1e-12, windows, done jobs), and a stop never leaves a job marked done early. Common practice for
+// 1e-12, windows, done jobs), a stop never leaves a job marked done early, and the resumed run goes on
+// under the stopped run's row instead of leaving it unfinished. Common practice for
 // crash-safe batch jobs: commit each finished unit, mark the whole done last, resume after the units.
 import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
 import { generateCatalog } from '../../generator/run/generate-catalog.ts';
 import { useTempCatalogDir } from '../catalog-db/temp-catalog-path.ts';
 import { expectSameCatalog, jobsDone, snapshotCatalog, type CatalogSnapshot } from './catalog-snapshot.ts';
@@ -68,5 +70,12 @@ describe('generate: stopped at any point of a job, resumed to the same catalog',
     const resumed = await generateCatalog({ ...quiet, configPath, dbPath, workers: 1 });
     expect(resumed.interrupted).toBe(false);
     expectSameCatalog(snapshotCatalog(dbPath), reference);
+    // The resumed run went on under the stopped run's row: one run, finished.
+    const reader = openCatalogForRead(dbPath);
+    try {
+      expect(reader.runs().map((r) => r.finishedAt !== null)).toEqual([true]);
+    } finally {
+      reader.close();
+    }
   });
 });
