@@ -80,6 +80,24 @@ function orbitPageWeight(outDir: string, base: string) {
   };
 }
 
+/** First-load weight of the largest family page: its HTML and the chart images, CSS and scripts it references
+ *  (the chart runtime and specs, loaded on first interaction, apart). */
+function familyPageWeight(outDir: string, base: string) {
+  const pages = filesUnder(join(outDir, 'family')).filter((f) => f.endsWith('index.html'));
+  const sizes = pages.map((f) => statSync(f).size);
+  const largest = pages[sizes.indexOf(Math.max(...sizes))];
+  const html = readFileSync(largest, 'utf8');
+  let referenced = 0;
+  // what the browser fetches on load: src attributes and <link> hrefs (stylesheets, preloads), not links
+  const loaded = [...html.matchAll(/\ssrc="([^"]+)"|<link\b[^>]*\shref="([^"]+)"/g)].map((m) => m[1] ?? m[2]!);
+  for (const ref of new Set(loaded.filter((u) => u.startsWith(base)))) {
+    const file = join(outDir, ref.slice(base.length));
+    if (existsSync(file) && !statSync(file).isDirectory() && !ref.endsWith('/')) referenced += statSync(file).size;
+  }
+  const runtime = filesUnder(join(outDir, '_astro')).filter((f) => f.includes('family-charts-client')).reduce((a, f) => a + statSync(f).size, 0);
+  return { page: largest.slice(outDir.length), html: html.length, referenced, runtime, meanHtml: sizes.reduce((a, b) => a + b, 0) / sizes.length };
+}
+
 async function finderFilterInBrowser(outDir: string): Promise<number[] | null> {
   if (!existsSync(CHROMIUM_PATH)) return null;
   const { serveStatic } = await import('../test/site/static-server.ts');
@@ -165,7 +183,10 @@ async function benchCatalog(label: string, dbPath: string, browser: boolean): Pr
     const screened = stats(orbitRoutes.filter((r) => screenedRoute(r.route)).map((r) => r.ms));
     const plain = stats(orbitRoutes.filter((r) => !screenedRoute(r.route)).map((r) => r.ms));
     console.log(`  screened orbit pages (${screened.n}): mean ${screened.mean.toFixed(1)} ms, median ${screened.median.toFixed(1)} ms; others (${plain.n}): mean ${plain.mean.toFixed(1)} ms, median ${plain.median.toFixed(1)} ms`);
-    console.log(`family pages (${family.n}): mean ${family.mean.toFixed(0)} ms, median ${family.median.toFixed(0)} ms (4 charts rendered by vega each, 5 with screened members)`);
+    console.log(`family pages (${family.n}): mean ${family.mean.toFixed(0)} ms, median ${family.median.toFixed(0)} ms (4 to 6 charts rendered by vega each: a window close-up where there are windows, hold radius where members were screened)`);
+    const familyWeight = familyPageWeight(outDir, '/');
+    console.log(`family page first load (largest, ${familyWeight.page}): HTML ${kb(familyWeight.html)} + chart images, CSS, scripts ${kb(familyWeight.referenced)} = ${kb(familyWeight.html + familyWeight.referenced)}   [target ≤ 400 KB]; HTML mean ${kb(familyWeight.meanHtml)}`);
+    console.log(`  chart runtime on first interaction: ${kb(familyWeight.runtime)} (shared, cached)`);
     console.log(`orbit page weight: HTML mean ${kb(weight.meanHtml)}, largest ${kb(weight.largestHtml)} (${kb(weight.largestHtmlGzip)} gzip)   [target < 150 KB]`);
     console.log(`  screened members' pages (hold radius, section plot, screenings): ${weight.screenedPages}, HTML mean ${kb(weight.meanScreenedHtml)}`);
     console.log(`  + family stability chart SVG ${kb(weight.familyChart)} (one file per family, cached across its members)`);
