@@ -1,6 +1,12 @@
 import type { AuditRow } from './audit-types.ts';
-import type { HoldRadiusRow, ModelScreeningRow } from './screening-types.ts';
-export type { HoldRadiusRow, ModelScreeningRow, ScreeningModelName, OrbitScreenings } from './screening-types.ts';
+import type { BifurcationRow, FamilyBundle, FamilyRow, OrbitRow, StableWindowRow } from '../generator/core/orbits/family-rows.ts';
+import type { HoldRadiusRow, ModelScreeningRow } from '../generator/core/orbits/screening-rows.ts';
+// The rows of one family are the core's result types (the core may not import catalog-db); they are
+// re-exported here because they are also the storage contract.
+export type {
+  BifurcationKind, BifurcationRow, FamilyBundle, FamilyKind, FamilyRow, OrbitRow, StabilityPlane, StableWindowRow,
+} from '../generator/core/orbits/family-rows.ts';
+export type { HoldRadiusRow, ModelScreeningRow, ScreeningModelName, OrbitScreenings } from '../generator/core/orbits/screening-rows.ts';
 export type { AuditMiss, AuditRow } from './audit-types.ts';
 
 // Row shapes of the SQLite catalog, shared by the generator (writes) and the site (reads).
@@ -35,99 +41,6 @@ export interface RunRow {
   shard: string; // "k/n", "1/1" when not sharded
   startedAt: string; // ISO 8601
   finishedAt: string | null; // null while running or after an interruption
-}
-
-export type FamilyKind = 'cycler' | 'lyapunov-l1' | 'lyapunov-l2' | 'retrograde' | 'other';
-
-export interface FamilyRow {
-  id: string; // stable id, e.g. "earth-moon/E2M1/a"
-  systemId: string;
-  runId: number;
-  configKey: string; // the job (config entry) that produced it, used by resume
-  name: string; // display name from the config (may contain any characters)
-  kind: FamilyKind;
-  signature: string; // e.g. "E3M2"; reference families use their own label, e.g. "L1-Lyapunov"
-  primaryLaps: number;
-  secondaryLaps: number;
-  seedSegment: string; // "far-primary" | "between" | "far-secondary"
-  endReasonStart: string; // why continuation stopped at the start end
-  endReasonEnd: string; // why it stopped at the other end
-  memberCount: number;
-  jacobiMin: number;
-  jacobiMax: number;
-  periodDaysMin: number;
-  periodDaysMax: number;
-  stableWindowCount: number;
-}
-
-export interface OrbitRow {
-  id: string; // e.g. "earth-moon/E2M1/a/0042"
-  familyId: string;
-  seq: number; // order along the family (0, 1, 2, ...)
-  arclength: number; // continuation parameter s at this member
-  state0: [number, number, number, number, number, number]; // x,y,z,vx,vy,vz at t = 0
-  jacobi: number;
-  period: number; // nondimensional
-  periodDays: number;
-  stabilityIndex: number; // in-plane ν = (λ + 1/λ)/2
-  verticalStabilityIndex: number;
-  eigenvalues: Array<[number, number]>; // the four non-unit eigenvalues of the monodromy, [re, im]
-  monodromy: number[]; // 36 numbers, row-major
-  primaryMinRadiusKm: number; // closest distance to the larger body's centre
-  primaryMinAltKm: number; // ... minus its radius
-  secondaryMinRadiusKm: number;
-  secondaryMinAltKm: number;
-  maxDistanceKm: number; // largest distance from the barycentre
-  l1Passages: number; // crossings of the plane x = x(L1) inside the neck over one period
-  signature: string;
-  synodicP: number | null; // period / synodic month ≈ p / q
-  synodicQ: number | null;
-  synodicRelError: number | null;
-  closureError: number; // |state(T) − state(0)|, nondimensional
-  jacobiDrift: number; // |C(T) − C(0)|
-  stable: boolean; // in-plane |ν| < 1 (the vertical index is reported on its own)
-}
-
-export interface StableWindowRow {
-  id: string;
-  familyId: string;
-  fromJacobi: number;
-  toJacobi: number;
-  fromSecondaryMinAltKm: number;
-  toSecondaryMinAltKm: number;
-  widthKm: number;
-  widthJacobi: number;
-  fromArclength: number;
-  toArclength: number;
-  midOrbitId: string;
-  midPeriodDays: number;
-}
-
-export type BifurcationKind = 'tangent' | 'period-doubling';
-export type StabilityPlane = 'in-plane' | 'vertical';
-
-export interface BifurcationRow {
-  id: string;
-  familyId: string;
-  kind: BifurcationKind; // ν = +1 tangent, ν = −1 period doubling
-  plane: StabilityPlane; // which index crossed ±1
-  arclength: number;
-  jacobi: number;
-  secondaryMinAltKm: number;
-  periodDays: number;
-  state0: [number, number, number, number, number, number];
-}
-
-/** A family with everything under it, as written in one transaction. */
-export interface FamilyBundle {
-  family: FamilyRow;
-  orbits: OrbitRow[];
-  stableWindows: StableWindowRow[];
-  bifurcations: BifurcationRow[];
-  /** Hold radius of screened stable members (absent: none screened). */
-  holdRadii?: HoldRadiusRow[];
-  /** Sun (bicircular) and eccentricity (elliptic) screenings of stable members. */
-  modelScreenings?: ModelScreeningRow[];
 }
 
 /** The invented scenario a catalog belongs to, kept in the meta table. */

@@ -1,7 +1,7 @@
 // The JSON and CSV exports with hold radii, screenings and vertical branch points. The JSON is checked
 // against catalog-db/catalog-export.schema.json with zod 4's z.fromJSONSchema (an independent reader of
 // JSON Schema draft 2020-12); the CSV is read back with vega's CSV reader (d3-dsv, an independent RFC 4180
-// parser). Names are those of the contract in catalog-db/screening-types.ts.
+// parser). Names are those of the contract in generator/core/orbits/screening-rows.ts.
 import { readFileSync } from 'node:fs';
 import { read as readTable } from 'vega';
 import { beforeAll, describe, expect, it } from 'vitest';

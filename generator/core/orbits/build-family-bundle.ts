@@ -1,7 +1,7 @@
 // Turns a continued, analysed family into catalog rows (nondimensional values plus km and days).
-import { familySummary } from '../../../catalog-db/family-summary.ts';
-import { stableWindowRow } from '../../../catalog-db/stable-window-row.ts';
-import type { BifurcationRow, FamilyBundle, FamilyKind, OrbitRow } from '../../../catalog-db/types.ts';
+import { familySummary } from './family-summary.ts';
+import { stableWindowRow } from './stable-window-row.ts';
+import type { BifurcationRow, FamilyBundle, FamilyKind, OrbitRow } from './family-rows.ts';
 import type { EndReason } from './continue-family.ts';
 import type { FamilyMember } from './family-member.ts';
 import type { SystemSpec } from './family-job.ts';

@@ -1,6 +1,6 @@
 // What one unit of generator work asks for (a "job": one config entry for one system) and what it yields.
 // The run layer builds jobs from the validated config and writes the bundles to the catalog.
-import type { FamilyBundle } from '../../../catalog-db/types.ts';
+import type { FamilyBundle } from './family-rows.ts';
 import type { DiscoveryResult } from './discovery/discover-candidates.ts';
 import type { StoredFamily } from './stored-family-trace.ts';
 import type { ZeroCandidate } from './discovery/zero-candidate.ts';

@@ -2,7 +2,7 @@
 // stability map): every member strictly inside a window with |ν| < 1 (the edges, located at |ν| = 1, are
 // left out), and among them the middle member of each window plus up to `membersPerWindow` more, spread
 // over the window's arclength, for the costlier hold radius.
-import type { OrbitRow, StableWindowRow } from '../../../catalog-db/types.ts';
+import type { OrbitRow, StableWindowRow } from './family-rows.ts';
 
 export interface ScreenedMembers {
   /** Stable members inside a window, in family order. */

@@ -2,7 +2,7 @@
 // discovery grids, discovery/), continue every distinct family they start,
 // locate the stability changes, screen the stable members (job.screening: screen-stable-members.ts) and
 // hand back catalog-ready bundles. Pure numerics, synchronous.
-import type { FamilyBundle, FamilyKind } from '../../../catalog-db/types.ts';
+import type { FamilyBundle, FamilyKind } from './family-rows.ts';
 import { lagrangePoints } from '../cr3bp/lagrange-points.ts';
 import type { AnalysisContext } from './analyse-orbit.ts';
 import { buildFamilyBundle } from './build-family-bundle.ts';

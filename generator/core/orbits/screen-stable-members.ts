@@ -10,7 +10,8 @@
 // resonance (rotation per return near 1/5, say) the 1e-10 map drifts ~4e-10 per return, enough to scramble
 // the circle order of 200 returns at the first displacement (1e-6) and report a radius of 0, where 1e-12
 // holds. A step ending inside a body (its radius, not only its centre) is an impact.
-import type { FamilyBundle, HoldRadiusRow, ModelScreeningRow, OrbitRow } from '../../../catalog-db/types.ts';
+import type { FamilyBundle, OrbitRow } from './family-rows.ts';
+import type { HoldRadiusRow, ModelScreeningRow } from './screening-rows.ts';
 import { holdRadius } from '../beyond/hold-radius.ts';
 import { screenInModel, type ScreeningModel, type ScreeningResult } from '../beyond/screen-in-model.ts';
 import type { ScreeningSettings, SystemSpec } from './family-job.ts';

@@ -1,5 +1,6 @@
 // Rows of the "beyond the CR3BP" results kept per stable orbit: hold radius and the Sun and eccentricity
-// screenings. Written with their family (same transaction); read by the site and the export.
+// screenings. The core returns them (screen-stable-members.ts); written with their family (same
+// transaction); read by the site and the export (catalog-db/types.ts re-exports them).
 
 export interface HoldRadiusRow {
   orbitId: string;

@@ -1,5 +1,5 @@
 // A stable window's row from its edge and middle orbits: edges in C and in altitude above the smaller body.
-import type { OrbitRow, StableWindowRow } from './types.ts';
+import type { OrbitRow, StableWindowRow } from './family-rows.ts';
 
 export function stableWindowRow(id: string, familyId: string, from: OrbitRow, to: OrbitRow, middle: OrbitRow): StableWindowRow {
   return {

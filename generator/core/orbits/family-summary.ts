@@ -1,5 +1,5 @@
 // The family row's summary columns, derived from its orbits and windows (the writer checks they agree).
-import type { FamilyRow, OrbitRow, StableWindowRow } from './types.ts';
+import type { FamilyRow, OrbitRow, StableWindowRow } from './family-rows.ts';
 
 export type FamilySummary = Pick<FamilyRow, 'memberCount' | 'jacobiMin' | 'jacobiMax' | 'periodDaysMin' | 'periodDaysMax' | 'stableWindowCount'>;
 
