@@ -1,7 +1,7 @@
 // The `cycler-atlas` command (bin/cycler-atlas.mjs loads this file through tsx).
 // One file per command in commands/; add a command by adding its factory to COMMANDS.
 import { Command } from 'commander';
-import { exitWithUsageCode } from '../run/command-exit.ts';
+import { exitWithUsageCode } from './command-exit.ts';
 import { createAuditCommand } from './commands/audit.ts';
 import { createExportCommand } from './commands/export.ts';
 import { createExportStateCommand } from './commands/export-state.ts';

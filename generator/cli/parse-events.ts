@@ -7,7 +7,7 @@
 import { closestApproach } from '../core/events/closest-approach.ts';
 import type { EventSpec } from '../core/events/event-spec.ts';
 import { yAxisCrossing } from '../core/events/y-axis-crossing.ts';
-import { UsageError } from '../run/command-line-values.ts';
+import { UsageError } from '../errors/usage-error.ts';
 import { readNumber } from './parse-number.ts';
 
 export const EVENT_SYNTAX = 'y=0[:up|:down|:any][:x<NUM][:x>NUM], perilune or perigee';

@@ -1,6 +1,6 @@
 // The mass ratio μ of a command: either --mu directly or a system preset by id (system-presets.ts).
 import { massRatioOf, SYSTEM_PRESETS, type SystemPreset } from '../core/cr3bp/system-presets.ts';
-import { UsageError } from '../run/command-line-values.ts';
+import { UsageError } from '../errors/usage-error.ts';
 import { parseNumberInRange, type NumberRange } from './parse-number.ts';
 
 /** μ = m₂ / (m₁ + m₂) with m₂ the smaller primary: (0, 0.5] (common practice). */

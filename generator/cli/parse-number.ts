@@ -1,7 +1,7 @@
 // Strict numbers for command-line values: plain decimals and exponent form ("1e-12", "-0.5", ".3").
 // Hex, blanks, "NaN" and "Infinity" are refused: Number() would accept some of them silently.
 import { formatRange } from '../config/format-value.ts';
-import { UsageError } from '../run/command-line-values.ts';
+import { UsageError } from '../errors/usage-error.ts';
 
 const NUMBER_PATTERN = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 

@@ -1,7 +1,7 @@
 // A CR3BP state from the command line: x,y,z,vx,vy,vz (spatial) or x,y,vx,vy (planar), nondimensional.
 import { distanceToPrimary, distanceToSecondary } from '../core/propagation/primary-distances.ts';
 import { formatNumber } from '../config/format-value.ts';
-import { UsageError } from '../run/command-line-values.ts';
+import { UsageError } from '../errors/usage-error.ts';
 import { readNumber } from './parse-number.ts';
 
 const STATE_FORMS = 'x,y,z,vx,vy,vz, or x,y,vx,vy for a planar state';

@@ -4,7 +4,7 @@
 // side file holds no data and is kept (removing it could let two runs lock two different files).
 import Database from 'better-sqlite3';
 import { realPathOf } from '../../catalog-db/same-file.ts';
-import { UsageError } from './command-line-values.ts';
+import { UsageError } from '../errors/usage-error.ts';
 
 export type ReleaseLock = () => void;
 

@@ -1,13 +1,7 @@
 // Parsers for the generator's command-line values. Each failure is one line naming the option and
 // what it allows; commands exit with USAGE_EXIT_CODE on them.
+import { UsageError } from '../errors/usage-error.ts';
 import { parseShard, type Shard } from './shard.ts';
-
-export const USAGE_EXIT_CODE = 2;
-
-/** A bad command-line argument (exit code 2), as opposed to a failure while working. */
-export class UsageError extends Error {
-  override name = 'UsageError';
-}
 
 export function parseIntegerOption(option: string, text: string, min: number, max: number): number {
   const value = Number(text);

@@ -4,7 +4,7 @@
 import { accessSync, closeSync, constants, existsSync, openSync, readSync, statSync } from 'node:fs';
 import { basename, dirname, resolve } from 'node:path';
 import { isCatalogOrSideFile } from '../../catalog-db/same-file.ts';
-import { UsageError } from './command-line-values.ts';
+import { UsageError } from '../errors/usage-error.ts';
 
 const CATALOG_FILE = 'a catalog file written by generate';
 /** Longest file name most file systems allow (bytes of one path component). */

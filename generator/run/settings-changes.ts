@@ -9,7 +9,7 @@ import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
 import { firstSystemConstantDifference } from '../../catalog-db/system-constants.ts';
 import type { CatalogReader, CatalogWriter } from '../../catalog-db/types.ts';
 import type { FamilyJob, SystemSpec } from '../core/orbits/family-job.ts';
-import { UsageError } from './command-line-values.ts';
+import { UsageError } from '../errors/usage-error.ts';
 
 export const RECOMPUTE_OPTION = '--recompute-changed';
 

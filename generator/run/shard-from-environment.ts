@@ -3,7 +3,8 @@
 // steps of SLURM_ARRAY_TASK_STEP, with SLURM_ARRAY_TASK_COUNT tasks. Kubernetes Indexed Jobs:
 // JOB_COMPLETION_INDEX (0-based); the Job's completion count is not in the environment, so it is given
 // with --shard-count. Every failure is one line naming the variable, its value and the allowed range.
-import { parseIntegerOption, parseShardOption, UsageError } from './command-line-values.ts';
+import { parseIntegerOption, parseShardOption } from './command-line-values.ts';
+import { UsageError } from '../errors/usage-error.ts';
 import { MAX_SHARDS, type Shard } from './shard.ts';
 
 export type ShardEnvironment = Readonly<Record<string, string | undefined>>;

@@ -4,7 +4,7 @@
 // families then cost depends on what is found.
 import { sharedDiscoveryGrids } from './shared-discovery.ts';
 import type { FamilyJob } from '../core/orbits/family-job.ts';
-import { UsageError } from './command-line-values.ts';
+import { UsageError } from '../errors/usage-error.ts';
 
 /** Grid points × crossings above which a run needs --force (the demo's grids need 1.8e6). */
 export const MAX_GRID_WORK = 2e8;

@@ -17,7 +17,7 @@ import type { FamilyBundle, SystemRow } from '../../catalog-db/types.ts';
 import { runExportState, type ExportStateFlags } from '../../generator/cli/commands/export-state.ts';
 import { findSystemPreset, massRatioOf, timeUnitSecondsOf } from '../../generator/core/cr3bp/system-presets.ts';
 import { runFamilyJob } from '../../generator/core/orbits/run-family-job.ts';
-import { UsageError } from '../../generator/run/command-line-values.ts';
+import { UsageError } from '../../generator/errors/usage-error.ts';
 import { runCli } from '../cli/run-cli.ts';
 import { makeBundle, makeRunInput, makeSystem } from '../catalog-db/make-rows.ts';
 import { useTempCatalogDir } from '../catalog-db/temp-catalog-path.ts';

@@ -2,7 +2,7 @@
 // states whose event function values are known by construction (common practice for unit tests of parsers).
 import { describe, expect, it } from 'vitest';
 import { forIntegrationDirection, parseEvent, parseEventList, parseStop, withStopEvent } from '../../generator/cli/parse-events.ts';
-import { UsageError } from '../../generator/run/command-line-values.ts';
+import { UsageError } from '../../generator/errors/usage-error.ts';
 
 const MU = 0.0121505842695;
 const at = (x: number, y: number, vx = 0, vy = 0) => Float64Array.from([x, y, 0, vx, vy, 0]);

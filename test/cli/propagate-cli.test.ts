@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { createPropagateCommand, runPropagate, type PropagateFlags } from '../../generator/cli/commands/propagate.ts';
 import { propagate } from '../../generator/core/index.ts';
-import { UsageError } from '../../generator/run/command-line-values.ts';
+import { UsageError } from '../../generator/errors/usage-error.ts';
 import { runCli } from './run-cli.ts';
 
 // HNW test orbit (Hairer, Nørsett & Wanner 1993, §II.0; DESIGN.md).

@@ -4,7 +4,7 @@
 // JOB_COMPLETION_INDEX from 0 to completions − 1 (Kubernetes Job documentation, "Indexed completion
 // mode"; from memory).
 import { describe, expect, it } from 'vitest';
-import { UsageError } from '../../generator/run/command-line-values.ts';
+import { UsageError } from '../../generator/errors/usage-error.ts';
 import { shardFromEnvironment, shardFromOptions } from '../../generator/run/shard-from-environment.ts';
 import { selectShard } from '../../generator/run/shard.ts';
 

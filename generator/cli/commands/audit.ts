@@ -6,7 +6,7 @@
 import { Command } from 'commander';
 import type { AuditMiss } from '../../../catalog-db/audit-types.ts';
 import { auditCatalog, DEFAULT_GRID_FACTOR } from '../../run/audit-catalog.ts';
-import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
+import { exitWithUsageCode, failWith } from '../command-exit.ts';
 import { parseIntegerOption } from '../../run/command-line-values.ts';
 import { handleInterrupts, INTERRUPTED_EXIT_CODE } from '../../run/interrupt-handler.ts';
 import { assertReadableCatalogPath, assertWritableCatalogPath } from '../../run/path-options.ts';

@@ -18,8 +18,8 @@ import { STATE_FRAMES, STATE_UNITS, type StateFrame, type StateUnits } from '../
 import { stateSeries } from '../../core/state-export/state-series.ts';
 import { stepSeconds, type StepUnit } from '../../core/state-export/step-units.ts';
 import { geocentricMoonAt } from '../../ephemeris/geocentric-moon.ts';
-import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
-import { UsageError } from '../../run/command-line-values.ts';
+import { exitWithUsageCode, failWith } from '../command-exit.ts';
+import { UsageError } from '../../errors/usage-error.ts';
 import { assertOutputIsNotInput } from '../../run/path-options.ts';
 import { parseNumberInRange, readNumber } from '../parse-number.ts';
 

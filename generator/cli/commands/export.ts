@@ -4,8 +4,8 @@ import { writeFileSync } from 'node:fs';
 import { Command } from 'commander';
 import { exportCatalogCsv, exportCatalogJson } from '../../../catalog-db/export-catalog.ts';
 import { openCatalogForRead } from '../../../catalog-db/open-catalog.ts';
-import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
-import { UsageError } from '../../run/command-line-values.ts';
+import { exitWithUsageCode, failWith } from '../command-exit.ts';
+import { UsageError } from '../../errors/usage-error.ts';
 import { assertOutputIsNotInput, assertReadableCatalogPath } from '../../run/path-options.ts';
 
 const DEFAULT_DB_PATH = 'catalog-db/demo.sqlite';

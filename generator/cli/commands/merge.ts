@@ -2,8 +2,8 @@
 // (created if missing). The rules for families present twice are catalog-db/merge-catalogs.ts's.
 import { Command } from 'commander';
 import { MergeRefusedError, mergeCatalogs } from '../../../catalog-db/merge-catalogs.ts';
-import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
-import { UsageError } from '../../run/command-line-values.ts';
+import { exitWithUsageCode, failWith } from '../command-exit.ts';
+import { UsageError } from '../../errors/usage-error.ts';
 import { lockCatalogNow } from '../../run/catalog-lock.ts';
 import { assertOutputIsNotInput, assertReadableCatalogPath, assertWritableCatalogPath } from '../../run/path-options.ts';
 

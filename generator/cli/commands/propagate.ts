@@ -7,8 +7,9 @@ import { propagate, DEFAULT_TOLERANCE } from '../../core/propagation/propagate.t
 import { sampleTrajectory } from '../../core/propagation/sample-trajectory.ts';
 import { SYSTEM_PRESETS } from '../../core/cr3bp/system-presets.ts';
 import type { EventSpec } from '../../core/events/event-spec.ts';
-import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
-import { parseIntegerOption, UsageError } from '../../run/command-line-values.ts';
+import { exitWithUsageCode, failWith } from '../command-exit.ts';
+import { parseIntegerOption } from '../../run/command-line-values.ts';
+import { UsageError } from '../../errors/usage-error.ts';
 import { parseMassRatio } from '../parse-mass-ratio.ts';
 import { describeRange, parseNumberInRange, readNumber, type NumberRange } from '../parse-number.ts';
 import { EVENT_SYNTAX, forIntegrationDirection, parseEventList, parseStop, withStopEvent } from '../parse-events.ts';

@@ -4,8 +4,8 @@
 // modulus λ of the re-integrated monodromy, drift 1e-9), or whose stored Jacobi constant, period or
 // stability indices disagree with the re-integration. Exit 1 if any does, 2 on bad arguments.
 import { Command } from 'commander';
-import { exitWithUsageCode, failWith } from '../../run/command-exit.ts';
-import { UsageError } from '../../run/command-line-values.ts';
+import { exitWithUsageCode, failWith } from '../command-exit.ts';
+import { UsageError } from '../../errors/usage-error.ts';
 import { assertReadableCatalogPath } from '../../run/path-options.ts';
 import { verifyCatalog } from '../../run/verify-catalog.ts';
 

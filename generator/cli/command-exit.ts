@@ -2,7 +2,7 @@
 // message, failures while working exit 1. Shared by generate, verify, export and merge.
 import type { Command, CommanderError } from 'commander';
 import { ConfigError } from '../config/validate-config.ts';
-import { UsageError, USAGE_EXIT_CODE } from './command-line-values.ts';
+import { UsageError, USAGE_EXIT_CODE } from '../errors/usage-error.ts';
 
 export function failWith(command: Command, error: unknown): never {
   const message = error instanceof Error ? error.message : String(error);
