@@ -14,6 +14,7 @@ import { idToPath } from '../../site/lib/id-path.ts';
 import { formatStabilityIndex } from '../../site/lib/format-stability-index.ts';
 import { queryToState } from '../../site/scripts/finder/finder-query.ts';
 import { buildSite, REPO_ROOT } from './build-site.ts';
+import { builtPages } from './built-pages.ts';
 import { finderSql } from './finder-sql.ts';
 import { launchChromium } from './launch-chromium.ts';
 import { parseOem } from './parse-oem.ts';
@@ -507,6 +508,14 @@ describe('built site in chromium', () => {
       await page.locator('#orbit-eigenvalues').screenshot({ path: join(ARTIFACTS, `orbit-eigenvalues-${width}.png`) });
       await ctx.close();
     }
+  });
+
+  it('every page states published sources for the constants; none says "from memory"', () => {
+    const pages = builtPages(join(dir, 'dist'));
+    expect(pages.length).toBeGreaterThan(20);
+    expect(pages.filter((p) => /from memory/i.test(p.html)).map((p) => p.path)).toEqual([]);
+    const home = pages.find((p) => p.path === 'index.html')!;
+    for (const name of ['JPL DE430 planetary constants (Folkner et al. 2014)', 'WGS-84', 'IAU mean lunar radius']) expect(home.text).toContain(name);
   });
 
   it('no request left 127.0.0.1', () => {

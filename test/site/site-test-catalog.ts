@@ -7,6 +7,7 @@
 //   by the generator's own analyseOrbit (monodromy, indices, distances), not typed in;
 // - a scenario and that family named with HTML and quotes, to check the site shows them as text.
 import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
+import { findSystemPreset } from '../../generator/core/cr3bp/system-presets.ts';
 import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
 import { orbitRowOf } from '../../generator/core/orbits/build-family-bundle.ts';
 import { openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
@@ -40,7 +41,8 @@ const arenstorfSystem: SystemRow = {
   primaryRadiusKm: 6378.137,
   secondaryRadiusKm: 1737.4,
   synodicPeriodDays: 29.530589,
-  source: 'μ from Hairer, Nørsett & Wanner (1993) §II.0; LU, TU, radii: Earth–Moon values of DESIGN.md (test catalog)',
+  // LU and radii are the Earth–Moon preset's, so the site shows that preset's source text as a real catalog would.
+  source: `μ from Hairer, Nørsett & Wanner (1993) §II.0; TU: Earth–Moon value of DESIGN.md (test catalog); LU and radii as the Earth–Moon preset: ${findSystemPreset('earth-moon').source}`,
 };
 
 export interface SiteTestCatalog {
@@ -52,6 +54,7 @@ export function writeSiteTestCatalog(path: string, synthetic = { orbitCount: 40,
   writeSyntheticCatalog(path, synthetic);
   addSyntheticScreenings(path);
   const writer = openCatalogForWrite(path);
+  let arenstorfOrbitId = '';
   try {
     writer.setScenario({ name: HOSTILE_SCENARIO, description: `Site test catalog. ${HOSTILE_TEXT}`, team: 'Site tests "team" <i>x</i>' });
     writer.upsertSystem(arenstorfSystem);
@@ -77,9 +80,11 @@ export function writeSiteTestCatalog(path: string, synthetic = { orbitCount: 40,
       bifurcations: [],
     };
     writer.writeFamily(bundle, { key: 'site-test:arenstorf' });
+    arenstorfOrbitId = orbit.id;
     writer.finishRun(runId, '2026-01-02T00:01:00.000Z');
-    return { path, arenstorfOrbitId: orbit.id };
   } finally {
     writer.close();
   }
+  return { path, arenstorfOrbitId };
 }
+
