@@ -14,3 +14,5 @@ export const finderHref = (query = ''): string => withBase(`finder/${query ? `?$
 export const finderDataHref = (): string => withBase('data/finder.json');
 export const catalogSqliteHref = (): string => withBase('downloads/catalog.sqlite');
 export const catalogJsonHref = (): string => withBase('downloads/catalog.json');
+/** The glossary, or one of its entries by anchor. */
+export const glossaryHref = (anchor = ''): string => withBase(`glossary/${anchor ? `#${anchor}` : ''}`);

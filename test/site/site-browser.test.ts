@@ -22,6 +22,9 @@ import { ARENSTORF, HOSTILE_SCENARIO, HOSTILE_TEXT, writeSiteTestCatalog } from 
 import { serveStatic, type StaticSite } from './static-server.ts';
 
 const BASE = '/atlas/';
+/** Every end reason the generator stores (the EndReason type of generator/core/orbits/continue-family.ts). */
+const ALL_END_REASONS = ['member-limit', 'jacobi-range', 'period-limit', 'collision-primary', 'collision-secondary', 'brake-orbit',
+  'signature-change', 'lost-l1-passage', 'precision-limit', 'no-convergence', 'unstable-far-from-windows', 'interrupted'];
 const ARTIFACTS = join(REPO_ROOT, 'test-artifacts');
 
 let dir: string;
@@ -516,6 +519,41 @@ describe('built site in chromium', () => {
     expect(pages.filter((p) => /from memory/i.test(p.html)).map((p) => p.path)).toEqual([]);
     const home = pages.find((p) => p.path === 'index.html')!;
     for (const name of ['JPL DE430 planetary constants (Folkner et al. 2014)', 'WGS-84', 'IAU mean lunar radius']) expect(home.text).toContain(name);
+  });
+
+  it('pages show plain words for end reasons, segments, kinds and job keys, linked to a glossary that defines them', async () => {
+    const pages = builtPages(join(dir, 'dist'));
+    const db = new Database(dbPath, { readonly: true });
+    const stored = db.prepare('SELECT config_key, seed_segment, end_reason_start, end_reason_end, kind FROM families').all() as Array<Record<string, string>>;
+    db.close();
+    // The codes of the generator's EndReason type (generator/core/orbits/continue-family.ts), segments and kinds.
+    const hyphenated = [...ALL_END_REASONS, 'far-primary', 'far-secondary', 'lyapunov-l1', 'lyapunov-l2'].filter((c) => c.includes('-'));
+    const raw = [...new Set([...hyphenated, ...stored.map((f) => f.config_key)])];
+    expect(stored.some((f) => f.end_reason_start === 'collision-secondary')).toBe(true); // the catalog does store codes
+    const token = (code: string) => new RegExp('(?<![\\w-])' + code.replace(/[.*+?^$|()[\]{}\\/]/g, '\\$&') + '(?![\\w-])');
+    const shown = pages.flatMap((p) => raw.filter((code) => token(code).test(p.text)).map((code) => `${p.path}: ${code}`));
+    expect(shown).toEqual([]);
+
+    const glossary = await open('glossary/');
+    const anchors = [
+      ...ALL_END_REASONS.map((c) => `end-reason-${c}`),
+      ...['far-primary', 'between', 'far-secondary'].map((c) => `segment-${c}`),
+      ...['cycler', 'lyapunov-l1', 'lyapunov-l2', 'retrograde', 'other'].map((c) => `kind-${c}`),
+      'mu', 'lu', 'tu', 'km', 'days', 'jacobi', 'nu', 'nu-z', 'lap-signature', 'stable-window', 'member', 'synodic-lock', 'hold-radius', 'job', 'run',
+    ];
+    for (const anchor of anchors) {
+      expect((await glossary.locator(`[id="${anchor}"] dt`).textContent())?.trim(), anchor).toBeTruthy();
+      expect(((await glossary.locator(`[id="${anchor}"] dd`).textContent()) ?? '').length, anchor).toBeGreaterThan(20);
+    }
+    await glossary.close();
+
+    const home = pages.find((p) => p.path === 'index.html')!;
+    expect(home.html).toContain(`${BASE}glossary/#end-reason-collision-secondary`);
+    expect(home.text).toContain('collision with the smaller body');
+    const family = pages.find((p) => p.html.includes(`${BASE}glossary/#kind-lyapunov-l1`))!;
+    expect(family, 'a family page links its kind').toBeDefined();
+    expect(family.html).toMatch(new RegExp(`${BASE}glossary/#segment-(far-primary|between|far-secondary)`));
+    expect(family.html).toContain(`${BASE}glossary/#job`);
   });
 
   it('no request left 127.0.0.1', () => {

@@ -6,6 +6,7 @@
 //   (0, −2.00158510637908252240537862224), period T = 17.0652165601579625588917206249. Its row is analysed
 //   by the generator's own analyseOrbit (monodromy, indices, distances), not typed in;
 // - a scenario and that family named with HTML and quotes, to check the site shows them as text.
+import Database from 'better-sqlite3';
 import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
 import { findSystemPreset } from '../../generator/core/cr3bp/system-presets.ts';
 import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
@@ -85,6 +86,23 @@ export function writeSiteTestCatalog(path: string, synthetic = { orbitCount: 40,
   } finally {
     writer.close();
   }
+  giveSyntheticFamiliesCodes(path);
   return { path, arenstorfOrbitId };
+}
+
+/**
+ * The synthetic families get the generator's own codes for end reasons and kind (they are invented rows
+ * anyway), so the site tests see codes a real catalog stores: the pages must show them in plain words.
+ */
+function giveSyntheticFamiliesCodes(path: string): void {
+  const db = new Database(path);
+  try {
+    const ids = (db.prepare("SELECT id FROM families WHERE system_id = 'earth-moon' ORDER BY id").all() as Array<{ id: string }>).map((r) => r.id);
+    const codes = [['collision-secondary', 'member-limit', 'cycler'], ['unstable-far-from-windows', 'jacobi-range', 'lyapunov-l1']];
+    const update = db.prepare('UPDATE families SET end_reason_start = ?, end_reason_end = ?, kind = ? WHERE id = ?');
+    ids.forEach((id, k) => update.run(...codes[k % codes.length], id));
+  } finally {
+    db.close();
+  }
 }
 
