@@ -521,6 +521,24 @@ describe('built site in chromium', () => {
     for (const name of ['JPL DE430 planetary constants (Folkner et al. 2014)', 'WGS-84', 'IAU mean lunar radius']) expect(home.text).toContain(name);
   });
 
+  it('the finder without JavaScript says that filtering needs it, shows no control that would do nothing, and keeps the table', async () => {
+    const noScript = await browser.newContext({ javaScriptEnabled: false });
+    const finder = await open('finder/', noScript);
+    const controls = ['#finder-form', '#finder-csv', '#finder-json', '#finder-prev', '#finder-next', '.sort-button'];
+    for (const selector of controls) {
+      for (const element of await finder.locator(selector).all()) expect(await element.isVisible(), selector).toBe(false);
+    }
+    expect(await finder.locator('#finder-status').innerText()).toMatch(/need JavaScript.*41 orbits are listed below/);
+    expect(await finder.locator('#finder-rows tr').count()).toBe(41);
+    expect(await finder.locator('#finder-table thead th').first().innerText()).not.toBe('');
+    await noScript.close();
+    const withScript = await open('finder/');
+    for (const selector of controls) await expect.poll(() => withScript.locator(selector).first().isVisible(), { message: selector }).toBe(true);
+    await expect.poll(() => withScript.locator('#finder-status').innerText()).toBe('');
+    expect(await withScript.locator('#finder-table thead [data-no-js]').count()).toBe(0);
+    await withScript.close();
+  });
+
   it('pages show plain words for end reasons, segments, kinds and job keys, linked to a glossary that defines them', async () => {
     const pages = builtPages(join(dir, 'dist'));
     const db = new Database(dbPath, { readonly: true });

@@ -21,6 +21,9 @@ export async function startFinder(root: HTMLElement): Promise<void> {
   const next = root.querySelector<HTMLButtonElement>('#finder-next')!;
   const base = root.dataset.base ?? '/';
   const status = root.querySelector<HTMLElement>('#finder-status')!;
+  for (const element of Array.from(root.querySelectorAll<HTMLElement>('[data-needs-js]'))) element.hidden = false;
+  for (const element of Array.from(root.querySelectorAll('[data-no-js]'))) element.remove();
+  status.textContent = 'Loading the orbit list…';
 
   let table: FinderTable;
   try {
