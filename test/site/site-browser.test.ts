@@ -539,6 +539,20 @@ describe('built site in chromium', () => {
     await withScript.close();
   });
 
+  it('the finder names a bad value or a minimum above the maximum, announced, instead of ignoring it silently', async () => {
+    const page = await open('finder/?pmin=abc');
+    const problems = page.locator('#finder-problems');
+    await expect.poll(() => problems.isVisible()).toBe(true);
+    expect(await problems.getAttribute('role')).toBe('alert');
+    expect(await problems.innerText()).toMatch(/“abc” is not a number, so this bound is ignored/);
+    await page.fill('input[name="pmin"]', '30');
+    await page.fill('input[name="pmax"]', '20');
+    await expect.poll(() => problems.innerText()).toMatch(/minimum 30 is above the maximum 20, so no orbit can match/);
+    await page.fill('input[name="pmax"]', '');
+    await expect.poll(() => problems.isVisible()).toBe(false);
+    await page.close();
+  });
+
   it('pages show plain words for end reasons, segments, kinds and job keys, linked to a glossary that defines them', async () => {
     const pages = builtPages(join(dir, 'dist'));
     const db = new Database(dbPath, { readonly: true });

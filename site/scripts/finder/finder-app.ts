@@ -5,6 +5,7 @@ import { rowsToCsv, rowsToJson } from './finder-export.ts';
 import { filterRows } from './finder-filter.ts';
 import { DEFAULT_STATE, queryToState, stateToQuery, type FinderState } from './finder-query.ts';
 import { finderRowHtml } from './finder-row.ts';
+import { queryProblems } from './query-problems.ts';
 import { isSortKey, sortOrder } from './finder-sort.ts';
 import { decodeFinderData, rowValues, type FinderTable } from './finder-table.ts';
 import { saveTextFile } from '../save-text-file.ts';
@@ -21,6 +22,7 @@ export async function startFinder(root: HTMLElement): Promise<void> {
   const next = root.querySelector<HTMLButtonElement>('#finder-next')!;
   const base = root.dataset.base ?? '/';
   const status = root.querySelector<HTMLElement>('#finder-status')!;
+  const problemsOut = root.querySelector<HTMLElement>('#finder-problems')!;
   for (const element of Array.from(root.querySelectorAll<HTMLElement>('[data-needs-js]'))) element.hidden = false;
   for (const element of Array.from(root.querySelectorAll('[data-no-js]'))) element.remove();
   status.textContent = 'Loading the orbit list…';
@@ -38,6 +40,8 @@ export async function startFinder(root: HTMLElement): Promise<void> {
   status.textContent = '';
 
   let state: FinderState = queryToState(location.search);
+  /** The query as typed (URL or form), before bad values are dropped: what the problems are about. */
+  let rawQuery = location.search;
   let order = sortOrder(table, state.sort, state.direction);
   const hits = new Int32Array(table.n);
   let hitCount = 0;
@@ -58,7 +62,8 @@ export async function startFinder(root: HTMLElement): Promise<void> {
         if (element.checked) query.set(element.name, '1');
       } else if (element.value.trim() !== '') query.set(element.name, element.value.trim());
     }
-    const parsed = queryToState(query.toString());
+    rawQuery = query.toString();
+    const parsed = queryToState(rawQuery);
     return { ...parsed, sort: state.sort, direction: state.direction, page: 0 };
   };
 
@@ -84,6 +89,9 @@ export async function startFinder(root: HTMLElement): Promise<void> {
     timeOut.textContent = `filtered in ${ms.toFixed(1)} ms`;
     timeOut.dataset.ms = String(ms);
     renderRows();
+    const problems = queryProblems(rawQuery);
+    problemsOut.hidden = problems.length === 0;
+    problemsOut.replaceChildren(...problems.map((text) => Object.assign(document.createElement('p'), { textContent: text })));
     const query = stateToQuery(state);
     const url = `${location.pathname}${query ? `?${query}` : ''}`;
     if (pushUrl) history.replaceState(null, '', url);
@@ -107,6 +115,7 @@ export async function startFinder(root: HTMLElement): Promise<void> {
   form.addEventListener('reset', () => {
     setTimeout(() => {
       state = { ...DEFAULT_STATE, sort: state.sort, direction: state.direction };
+      rawQuery = '';
       run(true);
     });
   });
