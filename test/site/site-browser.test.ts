@@ -4,7 +4,7 @@
 // and the dated downloads, which must equal what `export-state` writes in Node for the same request (the
 // CLI's own states are checked against astronomy-engine in test/beyond-integration/export-state.test.ts).
 import Database from 'better-sqlite3';
-import { mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
@@ -551,6 +551,28 @@ describe('built site in chromium', () => {
     await page.fill('input[name="pmax"]', '');
     await expect.poll(() => problems.isVisible()).toBe(false);
     await page.close();
+  });
+
+  it('small things: a skip link to the content, sizes on the catalog downloads, no timing figure in the finder', async () => {
+    const home = await open('');
+    await home.keyboard.press('Tab');
+    const skip = home.locator('a.skip-link');
+    expect(await skip.evaluate((el) => el === document.activeElement)).toBe(true);
+    expect(await skip.isVisible()).toBe(true);
+    await skip.press('Enter');
+    expect(await home.evaluate(() => document.activeElement?.id)).toBe('main');
+    const sqliteBytes = statSync(dbPath).size;
+    const jsonBytes = statSync(join(dir, 'dist', 'downloads', 'catalog.json')).size;
+    // sizes in kB or MB of 1000 (common practice, as the formatter says)
+    const kb = (bytes: number) => (bytes / 1e3 < 10 ? (bytes / 1e3).toFixed(1) : String(Math.round(bytes / 1e3)));
+    expect(sqliteBytes).toBeLessThan(1e6);
+    expect(await home.locator('main a[href$="downloads/catalog.sqlite"]').innerText()).toBe(`SQLite (${kb(sqliteBytes)} kB)`);
+    expect(await home.locator('main a[href$="downloads/catalog.json"]').innerText()).toBe(`JSON (${kb(jsonBytes)} kB)`);
+    await home.close();
+    const finder = await open('finder/');
+    await finder.waitForSelector('#finder[data-ready="true"]');
+    expect(await finder.locator('main').innerText()).not.toMatch(/filtered in|\d ms\b/);
+    await finder.close();
   });
 
   it('pages show plain words for end reasons, segments, kinds and job keys, linked to a glossary that defines them', async () => {

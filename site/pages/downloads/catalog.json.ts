@@ -1,14 +1,5 @@
 // downloads/catalog.json: the whole catalog through catalog-db's JSON export.
 import type { APIRoute } from 'astro';
-import { exportCatalogJson } from '../../../catalog-db/export-catalog.ts';
-import { openCatalogForRead } from '../../../catalog-db/open-catalog.ts';
-import { catalogDbPath } from '../../lib/catalog-source.ts';
+import { catalogJsonText } from '../../lib/catalog-json-text.ts';
 
-export const GET: APIRoute = () => {
-  const reader = openCatalogForRead(catalogDbPath());
-  try {
-    return new Response(JSON.stringify(exportCatalogJson(reader)), { headers: { 'Content-Type': 'application/json' } });
-  } finally {
-    reader.close();
-  }
-};
+export const GET: APIRoute = () => new Response(catalogJsonText(), { headers: { 'Content-Type': 'application/json' } });

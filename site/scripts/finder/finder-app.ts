@@ -86,7 +86,6 @@ export async function startFinder(root: HTMLElement): Promise<void> {
     const ms = performance.now() - t0;
     countOut.textContent = `${hitCount.toLocaleString('en-US')} of ${table.n.toLocaleString('en-US')} orbits`;
     countOut.dataset.count = String(hitCount);
-    timeOut.textContent = `filtered in ${ms.toFixed(1)} ms`;
     timeOut.dataset.ms = String(ms);
     renderRows();
     const problems = queryProblems(rawQuery);
