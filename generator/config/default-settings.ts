@@ -4,7 +4,8 @@ import type { AxisSegment, FamilyLimits, ScreeningSettings } from '../core/orbit
 import type { SystemJacobiBounds } from './system-jacobi-bounds.ts';
 import { jacobiGridLevels } from '../core/orbits/discovery/jacobi-grid-levels.ts';
 
-export const DEFAULT_TOLERANCE = { rtol: 1e-12, atol: 1e-12 } as const;
+// The core's default (propagation/tolerance.ts), re-exported beside the other config defaults.
+export { DEFAULT_TOLERANCE } from '../core/propagation/tolerance.ts';
 
 /** Stable-window edges located to this accuracy in ν. */
 export const DEFAULT_INDEX_TOLERANCE = 1e-6;

@@ -8,6 +8,7 @@ import { eigenvaluePair, stabilityIndices } from '../core/orbits/stability-indic
 import { orbitCheck } from '../core/orbits/verify-orbit.ts';
 import { propagate } from '../core/propagation/propagate.ts';
 import { largestEigenvalueModulus, STORED_VALUE_RELATIVE_LIMIT, verifyLimitsFor, type VerifyLimits } from './verify-limits.ts';
+import type { Tolerance } from '../core/propagation/tolerance.ts';
 
 export type StoredOrbit = Pick<
   OrbitRow,
@@ -30,8 +31,8 @@ export function recheckOrbit(
   mu: number,
   timeUnitS: number,
   orbit: StoredOrbit,
-  run: { rtol: number; atol: number },
-  tolerance: { rtol: number; atol: number },
+  run: Tolerance,
+  tolerance: Tolerance,
 ): OrbitRecheck {
   const disagreements: string[] = [];
   const failed = (why: string): OrbitRecheck => ({

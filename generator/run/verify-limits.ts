@@ -11,16 +11,18 @@
 // - Jacobi drift |C(T) − C(0)| ≤ max(1e-9, 1e3 · tol): C is an integral of motion, so its drift
 //   measures integration error only and does not grow with λ.
 // At the usual tol = 1e-12: closure ≤ 1e-8 · λ, drift ≤ 1e-9, re-integration at 1e-14.
+import type { Tolerance } from '../core/propagation/tolerance.ts';
+
 export interface VerifyLimits {
   closure: number;
   jacobiDrift: number;
 }
 
-export function verifyToleranceFor(run: { rtol: number; atol: number }): { rtol: number; atol: number } {
+export function verifyToleranceFor(run: Tolerance): Tolerance {
   return { rtol: Math.max(run.rtol / 100, 1e-14), atol: Math.max(run.atol / 100, 1e-14) };
 }
 
-export function verifyLimitsFor(run: { rtol: number; atol: number }, largestEigenvalueModulus: number): VerifyLimits {
+export function verifyLimitsFor(run: Tolerance, largestEigenvalueModulus: number): VerifyLimits {
   const tol = Math.max(run.rtol, run.atol);
   const growth = Number.isFinite(largestEigenvalueModulus) ? Math.max(1, largestEigenvalueModulus) : 1;
   return { closure: Math.max(1e-8, 1e4 * tol) * growth, jacobiDrift: Math.max(1e-9, 1e3 * tol) };

@@ -3,7 +3,8 @@
 // Exit codes: 0 done, 1 the integration failed (collision, step-size underflow, step limit), 2 bad arguments.
 import { Command } from 'commander';
 import { IntegrationError } from '../../core/dop853/integration-error.ts';
-import { propagate, DEFAULT_TOLERANCE } from '../../core/propagation/propagate.ts';
+import { propagate } from '../../core/propagation/propagate.ts';
+import { DEFAULT_TOLERANCE } from '../../core/propagation/tolerance.ts';
 import { sampleTrajectory } from '../../core/propagation/sample-trajectory.ts';
 import { SYSTEM_PRESETS } from '../../core/cr3bp/system-presets.ts';
 import type { EventSpec } from '../../core/events/event-spec.ts';
@@ -58,8 +59,8 @@ export function createPropagateCommand(): Command {
     .option('--system <id>', `instead of --mu: ${SYSTEM_PRESETS.map((p) => p.id).join(', ')}`)
     .option('--state <list>', 'x,y,z,vx,vy,vz, or x,y,vx,vy for a planar state')
     .option('--time <t>', 'duration, nondimensional (negative: backwards in time)')
-    .option('--rtol <r>', `relative tolerance, ${describeRange(TOLERANCE_RANGE)}`, String(DEFAULT_TOLERANCE))
-    .option('--atol <a>', `absolute tolerance, ${describeRange(TOLERANCE_RANGE)}`, String(DEFAULT_TOLERANCE))
+    .option('--rtol <r>', `relative tolerance, ${describeRange(TOLERANCE_RANGE)}`, String(DEFAULT_TOLERANCE.rtol))
+    .option('--atol <a>', `absolute tolerance, ${describeRange(TOLERANCE_RANGE)}`, String(DEFAULT_TOLERANCE.atol))
     .option('--stm', 'also integrate the state-transition matrix (printed row-major)')
     .option('--events <list>', `events to record: ${EVENT_SYNTAX} (see below)`)
     .option('--stop-at <event@k>', 'stop at the k-th occurrence of this event (k defaults to 1)')

@@ -5,6 +5,7 @@ import { jacobiConstant } from '../cr3bp/jacobi-constant.ts';
 import { propagate } from '../propagation/propagate.ts';
 import type { FamilyMember } from './family-member.ts';
 import type { OrbitFootprint } from './lies-on-family.ts';
+import type { Tolerance } from '../propagation/tolerance.ts';
 
 /** A stored member as the audit compares it: its footprint and its start velocity (for refinement). */
 export interface StoredFootprint extends OrbitFootprint {
@@ -12,7 +13,7 @@ export interface StoredFootprint extends OrbitFootprint {
 }
 
 export function storedOrbitFootprint(
-  mu: number, state0: readonly number[], periodNd: number, tolerance: { rtol: number; atol: number },
+  mu: number, state0: readonly number[], periodNd: number, tolerance: Tolerance,
 ): StoredFootprint {
   const planar = [state0[0], state0[1], state0[3], state0[4]];
   const half = propagate(mu, planar, periodNd / 2, tolerance);

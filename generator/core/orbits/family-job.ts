@@ -4,6 +4,7 @@ import type { FamilyBundle } from './family-rows.ts';
 import type { DiscoveryResult } from './discovery/discover-candidates.ts';
 import type { StoredFamily } from './stored-family-trace.ts';
 import type { ZeroCandidate } from './discovery/zero-candidate.ts';
+import type { Tolerance } from '../propagation/tolerance.ts';
 
 export type AxisSegment = 'far-primary' | 'between' | 'far-secondary';
 
@@ -75,7 +76,7 @@ export interface FamilyJob {
   system: SystemSpec;
   seed: SeedRule;
   limits: FamilyLimits;
-  tolerance: { rtol: number; atol: number };
+  tolerance: Tolerance;
   /** Window edges located to this accuracy in ν. */
   indexTolerance: number;
   /** Screenings of the stable members (absent: none, as with every setting disabled). */

@@ -17,6 +17,7 @@ import { screenInModel, type ScreeningModel, type ScreeningResult } from '../bey
 import type { ScreeningSettings, SystemSpec } from './family-job.ts';
 import { parseSignature } from './lap-signature.ts';
 import { pickScreenedMembers } from './pick-screened-members.ts';
+import type { Tolerance } from '../propagation/tolerance.ts';
 
 const SECONDS_PER_DAY = 86400;
 /** Section points kept of the outermost holding curve (every return up to 200 returns). */
@@ -42,7 +43,7 @@ export interface StableMemberScreenings {
 
 export function screenStableMembers(
   system: SystemSpec, bundle: Pick<FamilyBundle, 'family' | 'orbits' | 'stableWindows'>, settings: ScreeningSettings,
-  tolerance: { rtol: number; atol: number }, hooks: ScreeningHooks = {},
+  tolerance: Tolerance, hooks: ScreeningHooks = {},
 ): StableMemberScreenings {
   const out: StableMemberScreenings = { holdRadii: [], modelScreenings: [], notes: [], interrupted: false, screenedCount: 0, holdRadiusCount: 0 };
   const familyId = bundle.family.id;

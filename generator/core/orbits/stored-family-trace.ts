@@ -6,6 +6,7 @@ import { jacobiConstant } from '../cr3bp/jacobi-constant.ts';
 import { yAxisCrossing } from '../events/y-axis-crossing.ts';
 import { propagate } from '../propagation/propagate.ts';
 import type { FamilyTracePoint } from './discovery/family-coverage.ts';
+import type { Tolerance } from '../propagation/tolerance.ts';
 
 export interface StoredFamily {
   id: string;
@@ -17,7 +18,7 @@ export interface StoredFamilyTrace {
   points: Array<FamilyTracePoint & { periodNd: number }>;
 }
 
-export function storedFamilyTrace(mu: number, family: StoredFamily, tolerance: { rtol: number; atol: number }): StoredFamilyTrace {
+export function storedFamilyTrace(mu: number, family: StoredFamily, tolerance: Tolerance): StoredFamilyTrace {
   const points = family.members.map(({ state0, periodNd }) => {
     const planar = [state0[0]!, state0[1]!, state0[3]!, state0[4]!];
     // A little past T/2 so that the perpendicular crossing there is counted, well before the next one.

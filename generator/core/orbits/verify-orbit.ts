@@ -1,6 +1,7 @@
 // Re-integrates a stored orbit over one period: how far it is from closing and from keeping C.
 import { jacobiConstant } from '../cr3bp/jacobi-constant.ts';
 import { propagate } from '../propagation/propagate.ts';
+import type { Tolerance } from '../propagation/tolerance.ts';
 
 export interface OrbitCheck {
   closureError: number;
@@ -15,6 +16,6 @@ export function orbitCheck(mu: number, state0: ArrayLike<number>, end: ArrayLike
   };
 }
 
-export function verifyOrbit(mu: number, state0: readonly number[], periodNd: number, tolerance: { rtol: number; atol: number }): OrbitCheck {
+export function verifyOrbit(mu: number, state0: readonly number[], periodNd: number, tolerance: Tolerance): OrbitCheck {
   return orbitCheck(mu, state0, propagate(mu, state0, periodNd, tolerance).state);
 }

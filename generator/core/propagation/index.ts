@@ -1,4 +1,5 @@
-export { propagate, DEFAULT_TOLERANCE } from './propagate.ts';
+export { propagate } from './propagate.ts';
+export { DEFAULT_TOLERANCE, type Tolerance } from './tolerance.ts';
 export type { PropagateOptions, PropagationResult } from './propagate.ts';
 export { distanceToPrimary, distanceToSecondary } from './primary-distances.ts';
 export { sampleTrajectory } from './sample-trajectory.ts';

@@ -11,6 +11,7 @@ import { EventLocator, toSpatialState } from '../events/event-locator.ts';
 import { CollisionWatch } from './collision-watch.ts';
 import { distanceToPrimary, distanceToSecondary } from './primary-distances.ts';
 import { workspaceFor } from './workspace-cache.ts';
+import { DEFAULT_TOLERANCE } from './tolerance.ts';
 
 export interface PropagateOptions {
   rtol?: number;
@@ -37,8 +38,6 @@ export interface PropagationResult {
   steps: number;
   rejectedSteps: number;
 }
-
-export const DEFAULT_TOLERANCE = 1e-12;
 
 function equationsFor(mu: number, planar: boolean, stm: boolean): Rhs {
   if (planar) return stm ? planarStmEquations(mu) : planarEquations(mu);
@@ -70,8 +69,8 @@ export function propagate(mu: number, state0: ArrayLike<number>, durationNd: num
   let run;
   try {
     run = integrateDop853(rhs, ws, 0, y0, durationNd, {
-      rtol: options.rtol ?? DEFAULT_TOLERANCE,
-      atol: options.atol ?? DEFAULT_TOLERANCE,
+      rtol: options.rtol ?? DEFAULT_TOLERANCE.rtol,
+      atol: options.atol ?? DEFAULT_TOLERANCE.atol,
       maxSteps: options.maxSteps,
       maxStep: options.maxStepNd,
       dense: locator !== null,

@@ -2,8 +2,8 @@
 import { spatialEquations } from '../cr3bp/equations-spatial.ts';
 import { assertMassRatio } from '../cr3bp/lagrange-points.ts';
 import { evaluateDenseOutput, integrateDop853, type Dop853Workspace, type StepObserver } from '../dop853/index.ts';
-import { DEFAULT_TOLERANCE } from './propagate.ts';
 import { workspaceFor } from './workspace-cache.ts';
+import { DEFAULT_TOLERANCE, type Tolerance } from './tolerance.ts';
 
 export interface TrajectorySamples {
   timesNd: Float64Array;
@@ -28,7 +28,7 @@ class Sampler implements StepObserver {
 
 export function sampleTrajectory(
   mu: number, state0: ArrayLike<number>, durationNd: number, sampleCount: number,
-  tolerance: { rtol: number; atol: number } = { rtol: DEFAULT_TOLERANCE, atol: DEFAULT_TOLERANCE },
+  tolerance: Tolerance = DEFAULT_TOLERANCE,
 ): TrajectorySamples {
   if (!Number.isInteger(sampleCount) || sampleCount < 2) {
     throw new RangeError(`sampleCount must be an integer ≥ 2, got ${sampleCount}`);
@@ -45,7 +45,7 @@ export function sampleTrajectory(
  */
 export function sampleTrajectoryAt(
   mu: number, state0: ArrayLike<number>, timesNd: Float64Array,
-  tolerance: { rtol: number; atol: number } = { rtol: DEFAULT_TOLERANCE, atol: DEFAULT_TOLERANCE },
+  tolerance: Tolerance = DEFAULT_TOLERANCE,
 ): TrajectorySamples {
   assertMassRatio(mu);
   if (state0.length !== 6) throw new RangeError(`state0 must have 6 numbers, got ${state0.length}`);

@@ -1,5 +1,6 @@
 // What a state export needs to know of an orbit and its system, taken from the catalog's rows by one
 // function, so the CLI and the orbit page (which embeds it as JSON) describe the orbit identically.
+import type { Tolerance } from '../propagation/tolerance.ts';
 
 export interface ExportOrbit {
   orbitId: string;
@@ -18,7 +19,7 @@ export interface ExportOrbit {
   /** Nondimensional rotating-frame start state x, y, z, vx, vy, vz. */
   state0: number[];
   /** The integration tolerance of the catalog run that made the orbit (its provenance): the samples are as accurate as the orbit. */
-  tolerance: { rtol: number; atol: number };
+  tolerance: Tolerance;
 }
 
 /** The catalog rows' fields used here (structural, so the core needs no catalog-db import). */
@@ -26,7 +27,7 @@ export interface ExportOrbitRows {
   orbit: { id: string; seq: number; signature: string; period: number; state0: ArrayLike<number> };
   family: { id: string; name: string };
   system: { id: string; name: string; primaryName: string; secondaryName: string; mu: number; lengthUnitKm: number; timeUnitS: number };
-  run: { rtol: number; atol: number };
+  run: Tolerance;
 }
 
 export function exportOrbitOf({ orbit, family, system, run }: ExportOrbitRows): ExportOrbit {
