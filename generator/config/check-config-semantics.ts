@@ -7,7 +7,7 @@ import type { ConfigIssue, ConfigPath } from './config-path.ts';
 import { formatConfigPath } from './config-path.ts';
 import { familyKeyOf, resolveLimits, resolveSearch, type Sourced } from './family-settings.ts';
 import { formatNumber, formatRange, formatValue } from './format-value.ts';
-import { parseLapSignature } from './lap-signature-pattern.ts';
+import { parseConfigSignature } from './config-lap-signature.ts';
 import { resolveSystem } from './resolve-system.ts';
 import { checkSystemPhysics } from './check-system-physics.ts';
 import { systemJacobiBounds, type SystemJacobiBounds } from './system-jacobi-bounds.ts';
@@ -53,7 +53,7 @@ export function checkConfigSemantics(config: CatalogConfig): ConfigIssue | null 
 function checkFamily(config: CatalogConfig, index: number, entry: FamilyEntry, spec: SystemSpec, bounds: SystemJacobiBounds): ConfigIssue | null {
   const at = (...rest: PropertyKey[]): ConfigPath => ['families', index, ...rest];
   if ('signature' in entry) {
-    if (parseLapSignature(entry.signature, spec.primaryLetter, spec.secondaryLetter, MAX_SIGNATURE_LAPS) === null) {
+    if (parseConfigSignature(entry.signature, spec.primaryLetter, spec.secondaryLetter, MAX_SIGNATURE_LAPS) === null) {
       const p = spec.primaryLetter;
       const s = spec.secondaryLetter;
       return {

@@ -1,5 +1,5 @@
-// Parsers for the generator's command-line values. Each failure is one line naming the option and
-// what it allows; commands exit with USAGE_EXIT_CODE on them.
+// Integer and shard values of the command line, also read from the environment (shard-from-environment.ts),
+// hence in the run layer. Each failure is one line naming the option and what it allows (exit code 2).
 import { UsageError } from '../errors/usage-error.ts';
 import { parseShard, type Shard } from './shard.ts';
 
@@ -17,14 +17,4 @@ export function parseShardOption(option: string, text: string): Shard {
   } catch (error) {
     throw new UsageError(`${option}: ${(error as Error).message}`);
   }
-}
-
-/** Comma-separated numbers, e.g. "3.05,3.1". */
-export function parseNumberListOption(option: string, text: string): number[] {
-  const parts = text.split(',').map((part) => part.trim());
-  const values = parts.map(Number);
-  if (parts.some((part) => part === '') || values.some((v) => !Number.isFinite(v))) {
-    throw new UsageError(`${option}: "${text}" is not allowed (comma-separated numbers, e.g. 3.05,3.1)`);
-  }
-  return values;
 }
