@@ -575,6 +575,31 @@ describe('built site in chromium', () => {
     await finder.close();
   });
 
+  it("a family page's window table: ranges in ascending order whose ends differ, widths above zero never read 0", async () => {
+    const db = new Database(dbPath, { readonly: true });
+    const familyId = (db.prepare('SELECT family_id FROM stable_windows ORDER BY family_id LIMIT 1').get() as { family_id: string }).family_id;
+    const stored = db.prepare(`SELECT from_secondary_min_alt_km AS a0, to_secondary_min_alt_km AS a1, from_jacobi AS c0, to_jacobi AS c1, width_km AS w
+      FROM stable_windows WHERE family_id = ?`).all(familyId) as Array<Record<string, number>>;
+    db.close();
+    const spread = { alt: stored.filter((w) => w.a0 !== w.a1).length, jacobi: stored.filter((w) => w.c0 !== w.c1).length };
+    const shownSpread = { alt: 0, jacobi: 0 };
+    const page = await open(familyPath(familyId));
+    const read = (cell: string) => cell.split(' – ').map((v) => Number(v.replaceAll(',', '')));
+    const rows = page.locator('table tr:has(td[data-window-alt])');
+    expect(await rows.count()).toBeGreaterThan(0);
+    for (const row of await rows.all()) {
+      for (const key of ['alt', 'jacobi'] as const) {
+        const [lo, hi] = read(await row.locator(`[data-window-${key}]`).innerText());
+        expect(lo, key).toBeLessThanOrEqual(hi!);
+        if (lo! < hi!) shownSpread[key]++;
+      }
+    }
+    expect(shownSpread).toEqual(spread); // every window whose ends differ shows ends that differ
+    const widths = await page.locator('[data-window-width]').allInnerTexts();
+    expect(widths.filter((t) => Number(t.replaceAll(',', '')) > 0).length, widths.join(' | ') + ' vs ' + stored.map((w) => w.w).join(' | ')).toBe(stored.filter((w) => w.w > 0).length);
+    await page.close();
+  });
+
   it('pages show plain words for end reasons, segments, kinds and job keys, linked to a glossary that defines them', async () => {
     const pages = builtPages(join(dir, 'dist'));
     const db = new Database(dbPath, { readonly: true });
