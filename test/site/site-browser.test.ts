@@ -600,6 +600,16 @@ describe('built site in chromium', () => {
     await page.close();
   });
 
+  it("the finder's orbit column keeps each id on one line at 1366 px", async () => {
+    const ctx = await browser.newContext({ viewport: { width: 1366, height: 768 } });
+    const page = await open('finder/', ctx);
+    await page.waitForSelector('#finder[data-ready="true"]');
+    const lines = await page.locator('#finder-rows td a').evaluateAll((links) => links.map((a) => a.getClientRects().length));
+    expect(lines.length).toBeGreaterThan(0);
+    expect(lines.filter((n) => n !== 1)).toEqual([]);
+    await ctx.close();
+  });
+
   it('pages show plain words for end reasons, segments, kinds and job keys, linked to a glossary that defines them', async () => {
     const pages = builtPages(join(dir, 'dist'));
     const db = new Database(dbPath, { readonly: true });

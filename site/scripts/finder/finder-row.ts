@@ -10,6 +10,7 @@ const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => ESCAPES[c]!
 
 function cellClass(field: OrbitField, value: FieldValue): string {
   if (field.type === 'flag') return value ? 'tag-cell stable' : 'tag-cell unstable';
+  if (field.link) return 'link-cell'; // the orbit id, kept on one line
   return field.type === 'number' ? 'r num' : '';
 }
 
