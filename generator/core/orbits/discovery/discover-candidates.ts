@@ -5,6 +5,7 @@ import { segmentGrid, type ScanOptions } from '../scan-axis-segment.ts';
 import { computeResidualGrid, type GridProgress } from './residual-grid.ts';
 import type { ZeroCandidate } from './zero-candidate.ts';
 import { zeroSetCandidates } from './zero-set-candidates.ts';
+import { jumpEdgeCandidates } from './jump-edge-candidates.ts';
 
 /** One grid: the scan options (loose tolerance: signs, crossing times and laps only) plus its axes. */
 export interface DiscoveryRequest extends ScanOptions {
@@ -41,11 +42,16 @@ export function collisionRadiusOf(request: Pick<DiscoveryRequest, 'primaryRadius
 export function discoverCandidates(request: DiscoveryRequest, progress: GridProgress = {}): DiscoveryResult {
   const xs = segmentGrid(request.mu, request.segment, request.gridPoints, request);
   const levels = [...request.levels].sort((a, b) => a - b);
-  const grid = computeResidualGrid(request.mu, request.segment, request.direction, xs, levels, request.maxHalfCrossings, {
+  const options = {
     rtol: request.rtol, atol: request.atol, maxHalfTimeNd: request.maxHalfTimeNd,
     collisionRadiusNd: collisionRadiusOf(request), xL1: request.xL1,
-  }, progress);
+  };
+  const grid = computeResidualGrid(request.mu, request.segment, request.direction, xs, levels, request.maxHalfCrossings, options, progress);
   const gridPoints = xs.length * levels.length;
   if (!grid) return { request, gridPoints, xs, candidates: [], interrupted: true };
-  return { request, gridPoints, xs, candidates: zeroSetCandidates(grid), interrupted: false };
+  const onGrid = zeroSetCandidates(grid);
+  const firstPiece = onGrid.reduce((most, c) => Math.max(most, c.piece + 1), 0);
+  const withinEdges = jumpEdgeCandidates(grid, options, firstPiece, progress.shouldStop);
+  if (!withinEdges) return { request, gridPoints, xs, candidates: [], interrupted: true };
+  return { request, gridPoints, xs, candidates: [...onGrid, ...withinEdges], interrupted: false };
 }

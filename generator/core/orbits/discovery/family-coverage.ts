@@ -58,7 +58,8 @@ export class FamilyCoverage {
     }
   }
 
-  covers(c: { segment: AxisSegment; direction: 1 | -1; halfCrossings: number; along: 'x' | 'jacobi'; i: number; j: number }): boolean {
+  covers(c: { segment: AxisSegment; direction: 1 | -1; halfCrossings: number; along: 'x' | 'jacobi'; i: number; j: number; withinEdge?: boolean }): boolean {
+    if (c.withinEdge) return false; // one of several roots inside a grid edge: tried, and dedup decides
     return this.covered.has(edgeKey(FamilyCoverage.gridId(c.segment, c.direction), c.halfCrossings, c.along, c.i, c.j));
   }
 

@@ -31,4 +31,7 @@ export interface ZeroCandidate {
   /** Grid indices of the edge's first end (x index, level index). */
   i: number;
   j: number;
+  /** Found by sampling inside a grid edge whose crossing structure jumps (jump-edge-candidates.ts): the
+   *  edge's coverage by a continued family does not speak for it. */
+  withinEdge?: boolean;
 }

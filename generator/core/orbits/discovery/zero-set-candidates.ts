@@ -7,7 +7,7 @@ import { RECORD, residualIndex, type ResidualGrid } from './residual-grid.ts';
 import type { ZeroCandidate } from './zero-candidate.ts';
 
 /** Largest relative difference of the k-th crossing time between the two ends of a root edge. */
-const MAX_CROSSING_TIME_CHANGE = 0.25;
+export const MAX_CROSSING_TIME_CHANGE = 0.25;
 
 class UnionFind {
   private readonly parent: Int32Array;
