@@ -14,7 +14,7 @@ import { parseSignature } from './lap-signature.ts';
 import { footprintOf, liesOnFamily } from './lies-on-family.ts';
 import { locateStabilityChanges } from './locate-stability-changes.ts';
 import { lyapunovGuess, retrogradeGuess } from './reference-seeds.ts';
-import { discoverCandidates, type DiscoveryResult } from './discovery/discover-candidates.ts';
+import { discoverCandidates, residualOptionsOf, type DiscoveryResult } from './discovery/discover-candidates.ts';
 import { FamilyCoverage } from './discovery/family-coverage.ts';
 import { jobDiscoveryRequests } from './discovery/job-discovery-requests.ts';
 import { candidatesOfSignature, orderCandidates } from './discovery/order-candidates.ts';
@@ -174,10 +174,8 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
   const wanted = discovered
     .filter((d) => rule.segments.includes(d.request.segment) && rule.directions.includes(d.request.direction))
     .flatMap((d) => candidatesOfSignature(d.candidates, laps!, rule.maxHalfCrossings));
-  const residualOptions = {
-    rtol: Math.max(tolerance.rtol, 1e-10), atol: Math.max(tolerance.atol, 1e-10),
-    maxHalfTimeNd: limits.maxPeriodNd / 2, collisionRadiusNd: 0.5 * Math.min(primaryRadiusNd, secondaryRadiusNd),
-  };
+  // Roots are refined as their grids were computed (every grid of the job shares these settings).
+  const residualOptions = residualOptionsOf(jobDiscoveryRequests(job)[0]!);
   const fruitless = new Map<string, { known: number; rejected: number }>();
   const ordered = orderCandidates(wanted);
   seedSearch = { candidates: ordered.length, covered: 0, tried: 0 };

@@ -2,6 +2,7 @@
 // edges of its zero set. Every lap-signature job of a system with the same grid shares this result.
 import type { AxisSegment } from '../family-job.ts';
 import { segmentGrid, type ScanOptions } from '../scan-axis-segment.ts';
+import type { ResidualOptions } from '../half-crossing-residual.ts';
 import { computeResidualGrid, type GridProgress } from './residual-grid.ts';
 import type { ZeroCandidate } from './zero-candidate.ts';
 import { zeroSetCandidates } from './zero-set-candidates.ts';
@@ -39,13 +40,15 @@ export function collisionRadiusOf(request: Pick<DiscoveryRequest, 'primaryRadius
   return 0.5 * Math.min(request.primaryRadiusNd, request.secondaryRadiusNd);
 }
 
+/** How a root of the request's grid is followed: its loose tolerance, time limit and collision radius. */
+export function residualOptionsOf(request: DiscoveryRequest): ResidualOptions {
+  return { rtol: request.rtol, atol: request.atol, maxHalfTimeNd: request.maxHalfTimeNd, collisionRadiusNd: collisionRadiusOf(request) };
+}
+
 export function discoverCandidates(request: DiscoveryRequest, progress: GridProgress = {}): DiscoveryResult {
   const xs = segmentGrid(request.mu, request.segment, request.gridPoints, request);
   const levels = [...request.levels].sort((a, b) => a - b);
-  const options = {
-    rtol: request.rtol, atol: request.atol, maxHalfTimeNd: request.maxHalfTimeNd,
-    collisionRadiusNd: collisionRadiusOf(request), xL1: request.xL1,
-  };
+  const options = { ...residualOptionsOf(request), xL1: request.xL1 };
   const grid = computeResidualGrid(request.mu, request.segment, request.direction, xs, levels, request.maxHalfCrossings, options, progress);
   const gridPoints = xs.length * levels.length;
   if (!grid) return { request, gridPoints, xs, candidates: [], interrupted: true };
