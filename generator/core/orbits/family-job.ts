@@ -3,7 +3,6 @@
 import type { FamilyBundle } from './family-rows.ts';
 import type { DiscoveryResult } from './discovery/discover-candidates.ts';
 import type { StoredFamily } from './stored-family-trace.ts';
-import type { ZeroCandidate } from './discovery/zero-candidate.ts';
 import type { Tolerance } from '../propagation/tolerance.ts';
 
 export type AxisSegment = 'far-primary' | 'between' | 'far-secondary';
@@ -103,8 +102,6 @@ export interface DiscoveryProgress {
 export interface JobHooks {
   onProgress?(progress: JobProgress): void;
   onDiscovery?(progress: DiscoveryProgress): void;
-  /** What the seed search did with one root edge of the job's signature (diagnostics, benches). */
-  onCandidate?(candidate: ZeroCandidate, outcome: string): void;
   /** A family is finished (continued, windows located, screened): the run layer may write it at once. */
   onFamily?(bundle: FamilyBundle): void;
   /** Polled between members; true stops the job after the current member (interrupted families are marked so). */

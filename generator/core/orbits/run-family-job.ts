@@ -183,22 +183,17 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
     if (hooks.shouldStop?.()) return finish(true);
     if (coverage.covers(candidate)) {
       seedSearch.covered++;
-      hooks.onCandidate?.(candidate, 'covered');
       continue;
     }
     const piece = `${candidate.segment}${candidate.direction}:${candidate.piece}`;
     const tries = fruitless.get(piece) ?? { known: 0, rejected: 0 };
-    if (tries.known >= MAX_KNOWN_TRIES_PER_PIECE || tries.rejected >= MAX_REJECTED_TRIES_PER_PIECE) {
-      hooks.onCandidate?.(candidate, 'piece-given-up');
-      continue;
-    }
+    if (tries.known >= MAX_KNOWN_TRIES_PER_PIECE || tries.rejected >= MAX_REJECTED_TRIES_PER_PIECE) continue;
     seedSearch.tried++;
     const root = refineCandidate(mu, candidate, residualOptions);
     const corrected = root && correctAtFixedX0(mu, candidate.halfCrossings, root.x0, root.vy0, corrector);
     const start = corrected && betterConditionedStart(mu, candidate.halfCrossings, corrected, corrector);
     const outcome = start ? followSeed({ corrected: start, halfCrossings: candidate.halfCrossings, segment: candidate.segment }) : 'rejected';
     if (outcome === 'interrupted') return finish(true);
-    hooks.onCandidate?.(candidate, root ? (corrected ? (start ? outcome : 'other-crossing-failed') : 'no-convergence') : 'no-root');
     if (outcome === 'known') tries.known++;
     if (outcome === 'rejected') tries.rejected++;
     fruitless.set(piece, tries);
