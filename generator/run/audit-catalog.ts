@@ -98,6 +98,8 @@ export async function auditCatalog(options: AuditOptions): Promise<AuditReport> 
   let done = 0;
   const results = tasks.map((task) => runner.run(task).then((found) => {
     if (found) progress.step(++done, taskLabel(task));
+    // Asked again after each scan too: scans shorter than the poll interval would otherwise never hear it.
+    if (options.shouldStop?.()) runner.stop();
     return found;
   }));
   try {
