@@ -3,6 +3,7 @@
 import type {
   BifurcationRow,
   FamilyRow,
+  SignatureChangeRow,
   HoldRadiusRow,
   ModelScreeningRow,
   OrbitRow,
@@ -35,12 +36,14 @@ export interface CatalogExportOrbit extends Omit<OrbitRow, 'familyId'> {
 
 export type CatalogExportStableWindow = Omit<StableWindowRow, 'familyId'>;
 export type CatalogExportBifurcation = Omit<BifurcationRow, 'familyId'>;
+export type CatalogExportSignatureChange = Omit<SignatureChangeRow, 'familyId'>;
 
 export interface CatalogExportFamily extends Omit<FamilyRow, 'endReasonStart' | 'endReasonEnd'> {
   endReasons: { start: string; end: string };
   orbits: CatalogExportOrbit[];
   stableWindows: CatalogExportStableWindow[];
   bifurcations: CatalogExportBifurcation[];
+  signatureChanges: CatalogExportSignatureChange[];
 }
 
 export interface CatalogExport {

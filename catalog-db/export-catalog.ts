@@ -46,6 +46,7 @@ function exportFamily(reader: CatalogReader, family: FamilyRow): CatalogExportFa
     orbits: orbits.map((orbit) => exportOrbit(orbit, notes)),
     stableWindows: reader.stableWindows(family.id).map(({ familyId: _, ...window }) => window),
     bifurcations: bifurcations.map(({ familyId: _, ...bifurcation }) => bifurcation),
+    signatureChanges: reader.signatureChanges(family.id).map(({ familyId: _, ...change }) => change),
   };
 }
 

@@ -76,6 +76,8 @@ function prepareMergeInput(out: Database, outPath: string) {
   );
   const outRun = out.prepare('SELECT * FROM runs WHERE id = ?');
   const setRunFinished = out.prepare('UPDATE runs SET finished_at = ? WHERE id = ?');
+  const relink = out.prepare(`UPDATE signature_changes SET into_family_id = @into
+    WHERE family_id = @family AND side = @side AND into_family_id IS NULL AND EXISTS (SELECT 1 FROM families WHERE id = @into)`);
   const upsertJob = out.prepare(
     'INSERT INTO jobs (job_key, run_id, done_at, settings) VALUES (?, ?, ?, ?) ON CONFLICT (job_key) DO UPDATE ' +
       'SET run_id = excluded.run_id, done_at = excluded.done_at, settings = excluded.settings WHERE excluded.done_at > jobs.done_at',
@@ -138,6 +140,9 @@ function prepareMergeInput(out: Database, outPath: string) {
       if (merged.added) report.runsAdded += 1;
     }
 
+    // Rewriting a family unlinks the signature changes that continue into it (ON DELETE SET NULL): the
+    // links of both catalogs are put back once every family is in place.
+    const links = [...outReader.signatureChanges(), ...reader.signatureChanges()].filter((c) => c.intoFamilyId !== null);
     for (const family of reader.families()) {
       const existing = outReader.family(family.id);
       if (existing !== undefined) {
@@ -154,9 +159,12 @@ function prepareMergeInput(out: Database, outPath: string) {
         bifurcations: reader.bifurcations(family.id),
         holdRadii: reader.holdRadii(family.id),
         modelScreenings: reader.modelScreenings(family.id),
+        signatureChanges: reader.signatureChanges(family.id),
       });
       report.familiesWritten += 1;
     }
+
+    for (const c of links) relink.run({ into: c.intoFamilyId, family: c.familyId, side: c.side });
 
     for (const job of jobs) upsertJob.run(job.jobKey, runIdMap.get(job.runId), job.doneAt, JSON.stringify(job.settings));
     report.jobsMerged = jobs.length;

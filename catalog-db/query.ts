@@ -11,6 +11,7 @@ import {
   modelScreeningTable,
   orbitTable,
   runTable,
+  signatureChangeTable,
   stableWindowTable,
   systemTable,
 } from './table-columns.ts';
@@ -45,6 +46,8 @@ export function createCatalogReader(db: Database): CatalogReader {
       ORDER BY m.family_id, o.seq, m.model`),
     familyScreenings: all(`SELECT m.* FROM model_screenings AS m JOIN orbits AS o ON o.id = m.orbit_id
       WHERE m.family_id = ? ORDER BY o.seq, m.model`),
+    allSignatureChanges: all('SELECT * FROM signature_changes ORDER BY family_id, side DESC'),
+    familySignatureChanges: all('SELECT * FROM signature_changes WHERE family_id = ? ORDER BY side DESC'),
     jobs: all('SELECT job_key, run_id, done_at, settings FROM jobs ORDER BY job_key'),
   };
   const meta = prepareMetaStore(db);
@@ -67,6 +70,8 @@ export function createCatalogReader(db: Database): CatalogReader {
       (familyId === undefined ? q.allHoldRadii() : q.familyHoldRadii(familyId)).map(holdRadiusTable.fromRecord),
     modelScreenings: (familyId) =>
       (familyId === undefined ? q.allScreenings() : q.familyScreenings(familyId)).map(modelScreeningTable.fromRecord),
+    signatureChanges: (familyId) =>
+      (familyId === undefined ? q.allSignatureChanges() : q.familySignatureChanges(familyId)).map(signatureChangeTable.fromRecord),
     scenario: () => meta.getScenario(),
     jobSettings: () =>
       q.jobs().map(

@@ -1,4 +1,4 @@
-// Deletes a family (its orbits, windows, bifurcations, hold radii and model screenings go with it by
+// Deletes a family (its orbits, windows, bifurcations, hold radii, model screenings and signature changes go with it by
 // ON DELETE CASCADE) and inserts the new bundle. Opens no transaction itself: callers wrap it so that it is all or nothing.
 import type { Database } from 'better-sqlite3';
 import {
@@ -7,6 +7,7 @@ import {
   holdRadiusTable,
   modelScreeningTable,
   orbitTable,
+  signatureChangeTable,
   stableWindowTable,
 } from './table-columns.ts';
 import type { FamilyBundle } from './types.ts';
@@ -23,6 +24,7 @@ export function prepareReplaceFamily(db: Database): ReplaceFamily {
   const insertBifurcation = db.prepare(bifurcationTable.insertSql);
   const insertHoldRadius = db.prepare(holdRadiusTable.insertSql);
   const insertScreening = db.prepare(modelScreeningTable.insertSql);
+  const insertSignatureChange = db.prepare(signatureChangeTable.insertSql);
   const systemExists = db.prepare('SELECT 1 FROM systems WHERE id = ?').pluck();
   const runExists = db.prepare('SELECT 1 FROM runs WHERE id = ?').pluck();
 
@@ -43,5 +45,6 @@ export function prepareReplaceFamily(db: Database): ReplaceFamily {
     for (const bifurcation of bundle.bifurcations) insertBifurcation.run(bifurcationTable.toRecord(bifurcation));
     for (const row of bundle.holdRadii ?? []) insertHoldRadius.run(holdRadiusTable.toRecord(row));
     for (const row of bundle.modelScreenings ?? []) insertScreening.run(modelScreeningTable.toRecord(row));
+    for (const row of bundle.signatureChanges ?? []) insertSignatureChange.run(signatureChangeTable.toRecord(row));
   };
 }

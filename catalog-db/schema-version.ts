@@ -2,4 +2,5 @@
 // Bump it whenever schema.sql changes in a way older readers or writers cannot handle.
 // 2: hold_radii, model_screenings and the view vertical_branch_points (v1 files are refused; regenerate).
 // 3: jobs.settings, the settings each done job's results depend on, and audits (v2 files are refused; regenerate).
-export const CATALOG_SCHEMA_VERSION = 3;
+// 4: signature_changes, where a family's lap signature changes and the family it continues into (v3 refused; regenerate).
+export const CATALOG_SCHEMA_VERSION = 4;

@@ -5,6 +5,7 @@
 -- text. STRICT tables reject values of the wrong type.
 -- Version 2 added hold_radii, model_screenings and the view vertical_branch_points.
 -- Version 3 added jobs.settings: the settings a done job's results depend on, and the audits table.
+-- Version 4 added signature_changes: where a family's lap signature changes and what it continues into.
 
 CREATE TABLE systems (
   id                  TEXT PRIMARY KEY,
@@ -146,6 +147,24 @@ CREATE TABLE model_screenings (
   PRIMARY KEY (orbit_id, model)
 ) STRICT;
 
+-- A family end where the lap signature changes: the first corrected orbit past it (it has the new
+-- signature) and the catalogued family that orbit lies on (into_family_id; NULL until a run has found or
+-- continued it, and again after that family is rewritten: the next run links it anew).
+CREATE TABLE signature_changes (
+  family_id      TEXT NOT NULL REFERENCES families (id) ON DELETE CASCADE,
+  side           TEXT NOT NULL CHECK (side IN ('start', 'end')),
+  signature      TEXT NOT NULL,
+  state0         TEXT NOT NULL CHECK (json_array_length(state0) = 6),
+  jacobi         REAL NOT NULL,
+  period         REAL NOT NULL,
+  period_days    REAL NOT NULL,
+  -- deferred: a merge may write a family before the one it continues into
+  into_family_id TEXT REFERENCES families (id) ON DELETE SET NULL DEFERRABLE INITIALLY DEFERRED,
+  -- 1 once a run has followed the orbit as a family of the job of its signature (tried once only)
+  followed_up    INTEGER NOT NULL CHECK (followed_up IN (0, 1)),
+  PRIMARY KEY (family_id, side)
+) STRICT;
+
 -- One row per config entry (job) whose families are all written; resume skips these. settings is the
 -- job as the generator got it (system constants, seed rule, limits, tolerances, screening; JSON), so a
 -- later run or a merge can tell whether the stored results still match what it would compute.
@@ -189,6 +208,8 @@ CREATE INDEX stable_windows_by_mid_orbit ON stable_windows (mid_orbit_id);
 CREATE INDEX bifurcations_by_family ON bifurcations (family_id, arclength);
 CREATE INDEX hold_radii_by_family ON hold_radii (family_id);
 CREATE INDEX model_screenings_by_family ON model_screenings (family_id);
+-- Without this index every deleted family would scan signature_changes for the SET NULL.
+CREATE INDEX signature_changes_by_target ON signature_changes (into_family_id);
 
 -- Vertically critical members (vertical stability index = +1 or -1): the branch points of spatial
 -- families off these planar ones. They are the bifurcation rows with plane 'vertical'; the view names

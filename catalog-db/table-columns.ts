@@ -8,6 +8,7 @@ import type {
   ModelScreeningRow,
   OrbitRow,
   RunRow,
+  SignatureChangeRow,
   StableWindowRow,
   SystemRow,
 } from './types.ts';
@@ -145,6 +146,18 @@ const modelScreeningColumns: ColumnSpec<ModelScreeningRow> = {
   parameters: 'realRecord',
 };
 
+const signatureChangeColumns: ColumnSpec<SignatureChangeRow> = {
+  familyId: 'text',
+  side: 'text',
+  signature: 'text',
+  state0: 'state6',
+  jacobi: 'real',
+  period: 'real',
+  periodDays: 'real',
+  intoFamilyId: 'text?',
+  followedUp: 'bool',
+};
+
 export const systemTable = createRowMapper('system', 'systems', systemColumns);
 export const runTable = createRowMapper('run', 'runs', runColumns);
 export const familyTable = createRowMapper('family', 'families', familyColumns);
@@ -153,3 +166,4 @@ export const stableWindowTable = createRowMapper('stable window', 'stable_window
 export const bifurcationTable = createRowMapper('bifurcation', 'bifurcations', bifurcationColumns);
 export const holdRadiusTable = createRowMapper('hold radius', 'hold_radii', holdRadiusColumns);
 export const modelScreeningTable = createRowMapper('model screening', 'model_screenings', modelScreeningColumns);
+export const signatureChangeTable = createRowMapper('signature change', 'signature_changes', signatureChangeColumns);

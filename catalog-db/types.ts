@@ -1,10 +1,10 @@
 import type { AuditRow } from './audit-types.ts';
-import type { BifurcationRow, FamilyBundle, FamilyRow, OrbitRow, StableWindowRow } from '../generator/core/orbits/family-rows.ts';
+import type { BifurcationRow, FamilyBundle, FamilyRow, OrbitRow, SignatureChangeRow, StableWindowRow } from '../generator/core/orbits/family-rows.ts';
 import type { HoldRadiusRow, ModelScreeningRow } from '../generator/core/orbits/screening-rows.ts';
 // The rows of one family are the core's result types (the core may not import catalog-db); they are
 // re-exported here because they are also the storage contract.
 export type {
-  BifurcationKind, BifurcationRow, FamilyBundle, FamilyKind, FamilyRow, OrbitRow, StabilityPlane, StableWindowRow,
+  BifurcationKind, BifurcationRow, FamilyBundle, FamilyKind, FamilyRow, OrbitRow, SignatureChangeRow, StabilityPlane, StableWindowRow,
 } from '../generator/core/orbits/family-rows.ts';
 export type { HoldRadiusRow, ModelScreeningRow, ScreeningModelName, OrbitScreenings } from '../generator/core/orbits/screening-rows.ts';
 export type { AuditMiss, AuditRow } from './audit-types.ts';
@@ -78,6 +78,8 @@ export interface CatalogReader {
   holdRadii(familyId?: string): HoldRadiusRow[];
   /** Sun and eccentricity screenings, ordered by familyId, the orbit's seq, then model. */
   modelScreenings(familyId?: string): ModelScreeningRow[];
+  /** Family ends where the lap signature changes, ordered by familyId, then side. */
+  signatureChanges(familyId?: string): SignatureChangeRow[];
   scenario(): ScenarioMeta | null; // null until setScenario has been called
   /** Every done job with the settings it was computed with, ordered by jobKey. */
   jobSettings(): StoredJobSettings[];
@@ -100,6 +102,8 @@ export interface CatalogWriter {
   writeFamily(bundle: FamilyBundle, completesJob?: JobWithSettings): void;
   /** Marks a job done that produced no family (e.g. nothing found), with its settings, in one transaction. */
   markJobDone(job: JobWithSettings, runId: number): void;
+  /** Records the family a signature change continues into (null: none found) and whether it was followed up. */
+  linkSignatureChange(familyId: string, side: SignatureChangeRow['side'], link: Pick<SignatureChangeRow, 'intoFamilyId' | 'followedUp'>): void;
   /** Stores the scenario's name, description and team (replaces any earlier ones). */
   setScenario(scenario: ScenarioMeta): void;
   /** Stores a finished completeness audit (one transaction); returns its id. */

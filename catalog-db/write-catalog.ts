@@ -36,6 +36,7 @@ export function createCatalogWriter(db: Database): CatalogWriter {
     }
     return { families, jobs };
   });
+  const linkSignatureChange = db.prepare('UPDATE signature_changes SET into_family_id = ?, followed_up = ? WHERE family_id = ? AND side = ?');
   const replaceFamily = prepareReplaceFamily(db);
   const meta = prepareMetaStore(db);
   const audits = prepareAuditStore(db);
@@ -81,6 +82,11 @@ export function createCatalogWriter(db: Database): CatalogWriter {
     },
     markJobDone(job, runId) {
       db.transaction(() => markJob(job, runId, 'markJobDone'))();
+    },
+    linkSignatureChange(familyId, side, link) {
+      if (linkSignatureChange.run(link.intoFamilyId, link.followedUp ? 1 : 0, familyId, side).changes === 0) {
+        throw new Error(`linkSignatureChange: family ${familyId} has no signature change at its ${side}`);
+      }
     },
     setScenario(scenario) {
       meta.setScenario(scenario);

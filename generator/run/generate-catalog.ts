@@ -13,11 +13,12 @@ import { generatorVersion, gitCommit, sha256Hex } from './run-provenance.ts';
 import { orderJobsByCost } from './order-jobs-by-cost.ts';
 import { settleSettingsChanges } from './settings-changes.ts';
 import { formatShard, selectShard, type Shard } from './shard.ts';
-import { createFamilyPool, defaultWorkerCount } from './worker-pool.ts';
+import { createFamilyPool, defaultWorkerCount, type FamilyPool } from './worker-pool.ts';
 import { createJobWriter } from './write-job-result.ts';
 import { assertWorkWithinBound } from './work-estimate.ts';
 import { sharedDiscoveryGrids, startSharedDiscovery } from './shared-discovery.ts';
 import { storedFamiliesOfJob } from './stored-families-of-job.ts';
+import { linkSignatureChanges } from './link-signature-changes.ts';
 
 export interface GenerateOptions {
   dbPath: string;
@@ -113,6 +114,7 @@ export async function generateFromConfig(loaded: LoadedConfig, options: Generate
         `, ${pending.length} to run`,
     );
     if (pending.length > 0) await runJobs(pending, writer, runId, options, log, summary);
+    if (!summary.interrupted) await linkChanges(writer, runId, jobs, options, log, summary);
     // An interrupted run keeps finishedAt null (catalog-db/types.ts: null after an interruption).
     if (!summary.interrupted) writer.finishRun(runId, new Date().toISOString());
     summary.seconds = (Date.now() - startMs) / 1000;
@@ -186,6 +188,30 @@ async function runJobs(
     removeHandler();
     display.end();
     await pool.destroy();
+  }
+}
+
+/** Links each signature change to the family it continues into, following hand-offs (link-signature-changes.ts). */
+async function linkChanges(writer: CatalogWriter, runId: number, jobs: FamilyJob[], options: GenerateOptions, log: (line: string) => void, summary: GenerateSummary): Promise<void> {
+  let stop = false;
+  let pool: FamilyPool | null = null;
+  const removeHandler = options.handleSigint === false ? () => {} : handleInterrupts(() => {
+    stop = true;
+    pool?.requestStop();
+  }, log);
+  try {
+    const linked = await linkSignatureChanges({
+      dbPath: options.dbPath, writer, runId, jobs, log, shouldStop: () => stop, pool: () => (pool ??= createFamilyPool(1)),
+    });
+    summary.familiesWritten += linked.familiesWritten;
+    summary.membersWritten += linked.membersWritten;
+    if (linked.interrupted) summary.interrupted = true;
+    if (linked.linked + linked.followed + linked.unlinked > 0) {
+      log(`signature changes: ${linked.linked} linked, ${linked.followed} followed as new families (${linked.familiesWritten} written), ${linked.unlinked} without a catalogued family`);
+    }
+  } finally {
+    removeHandler();
+    await (pool as FamilyPool | null)?.destroy();
   }
 }
 

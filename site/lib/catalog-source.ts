@@ -4,7 +4,7 @@ import { resolve } from 'node:path';
 import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
 import type {
   BifurcationRow, FamilyRow, HoldRadiusRow, ModelScreeningRow, OrbitRow, OrbitScreenings, RunRow, ScenarioMeta,
-  StableWindowRow, SystemRow,
+  SignatureChangeRow, StableWindowRow, SystemRow,
 } from '../../catalog-db/types.ts';
 
 export interface CatalogSnapshot {
@@ -28,6 +28,8 @@ export interface CatalogSnapshot {
   windowsByFamily: Map<string, StableWindowRow[]>;
   bifurcationsByFamily: Map<string, BifurcationRow[]>;
   holdRadiiByFamily: Map<string, HoldRadiusRow[]>;
+  /** Ends where the family's lap signature changes, with the family each continues into. */
+  signatureChangesByFamily: Map<string, SignatureChangeRow[]>;
   /** Hold radius and model screenings of each screened orbit (absent: not screened). */
   screeningsByOrbit: Map<string, OrbitScreenings>;
 }
@@ -95,6 +97,7 @@ export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
       windowsByFamily: groupBy(stableWindows, (w) => w.familyId),
       bifurcationsByFamily: groupBy(bifurcations, (b) => b.familyId),
       holdRadiiByFamily: groupBy(holdRadii, (h) => h.familyId),
+      signatureChangesByFamily: groupBy(reader.signatureChanges(), (c) => c.familyId),
       screeningsByOrbit: screeningsByOrbit(holdRadii, modelScreenings),
     };
   } finally {

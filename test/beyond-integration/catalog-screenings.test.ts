@@ -137,13 +137,13 @@ describe('hold radii and model screenings in the catalog', () => {
   });
 
   it('a version-1 catalog is refused with the one-line message, for reading and writing', () => {
-    expect(CATALOG_SCHEMA_VERSION).toBe(3);
+    expect(CATALOG_SCHEMA_VERSION).toBe(4);
     const path = catalogPath('v1.sqlite');
     newCatalog('v1.sqlite').writer.close();
     const raw = new Database(path);
     raw.pragma('user_version = 1');
     raw.close();
-    const expected = `catalog ${path} has schema version 1, this cycler-atlas needs 3 (regenerate it or use a matching version)`;
+    const expected = `catalog ${path} has schema version 1, this cycler-atlas needs 4 (regenerate it or use a matching version)`;
     expect(() => openCatalogForRead(path)).toThrow(expected);
     expect(() => openCatalogForWrite(path)).toThrow(expected);
   });

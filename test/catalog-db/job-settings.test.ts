@@ -51,7 +51,7 @@ describe('jobs.settings', () => {
     const raw = new Database(path);
     raw.pragma('user_version = 2');
     raw.close();
-    expect(() => openCatalogForRead(path)).toThrow(`catalog ${path} has schema version 2, this cycler-atlas needs 3`);
-    expect(() => openCatalogForWrite(path)).toThrow(`catalog ${path} has schema version 2, this cycler-atlas needs 3`);
+    expect(() => openCatalogForRead(path)).toThrow(`catalog ${path} has schema version 2, this cycler-atlas needs 4`);
+    expect(() => openCatalogForWrite(path)).toThrow(`catalog ${path} has schema version 2, this cycler-atlas needs 4`);
   });
 });

@@ -31,7 +31,7 @@ describe('opening a catalog', () => {
     expect(db.pragma('journal_mode', { simple: true })).toBe('wal');
     expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
     const tables = db.prepare("SELECT name FROM sqlite_schema WHERE type = 'table' ORDER BY name").pluck().all();
-    expect(tables).toEqual(['audits', 'bifurcations', 'families', 'hold_radii', 'jobs', 'meta', 'model_screenings', 'orbits', 'runs', 'stable_windows', 'systems']);
+    expect(tables).toEqual(['audits', 'bifurcations', 'families', 'hold_radii', 'jobs', 'meta', 'model_screenings', 'orbits', 'runs', 'signature_changes', 'stable_windows', 'systems']);
     // The site reads a family's members by (family_id, seq); the plan must use the index, not a scan.
     const plan = db
       .prepare("EXPLAIN QUERY PLAN SELECT * FROM orbits WHERE family_id = 'x' ORDER BY seq")

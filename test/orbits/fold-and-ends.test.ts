@@ -15,25 +15,13 @@ import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
 import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
 import { BRAKE_SPEED_ND } from '../../generator/core/orbits/continue-family.ts';
 import { correctOnArc } from '../../generator/core/orbits/correct-on-arc.ts';
-import type { FamilyJob } from '../../generator/core/orbits/family-job.ts';
 import { formatSignature } from '../../generator/core/orbits/lap-signature.ts';
-import { EARTH_MOON, jobResult } from './helpers/earth-moon-jobs.ts';
+import { EARTH_MOON, FOLD_JOB, jobResult } from './helpers/earth-moon-jobs.ts';
 import { odexFlow } from './helpers/odex-flow.ts';
 
 const mu = EARTH_MOON.mu;
 const xL1 = lagrangePoints(mu)[0]!.x;
-const cL1 = lagrangePoints(mu)[0]!.jacobi;
 
-const FOLD_JOB: FamilyJob = {
-  key: 'test:E1M1-fold', name: 'E1M1 fold (test)', system: EARTH_MOON,
-  seed: {
-    // The half period of these orbits ends at the third crossing of y = 0 (beyond the Moon).
-    kind: 'lap-signature', signature: 'E1M1', segments: ['far-primary'], directions: [-1], maxHalfCrossings: 3, gridPoints: 300,
-    jacobiValues: [3.09, 3.12, 3.145, 3.152],
-  },
-  limits: { maxMembers: 2000, jacobiMin: 2.9, jacobiMax: cL1, maxPeriodNd: 40, unstableStop: null, initialStepNd: 1e-3, maxStepNd: 0.02 },
-  tolerance: { rtol: 1e-12, atol: 1e-12 }, indexTolerance: 1e-6,
-};
 
 const ends = (b: FamilyBundle) => [b.family.endReasonStart, b.family.endReasonEnd];
 
@@ -95,9 +83,11 @@ describe('folds and natural ends (one small E1M1 job)', () => {
       const half = odexFlow(mu, next.state0, next.period / 2, { tolerance: 1e-13 }).state;
       expect(Math.abs(half[3]!), `${next.id}: vx at T/2`).toBeLessThan(1e-6);
     }
-    // A brake-orbit end (both crossings brake points) keeps ẏ0 near zero at its last member.
+    // A brake-orbit end: at its last member one of the two crossings (t = 0 or T/2) has ẏ near zero.
     for (const b of bundles.filter((f) => ends(f).includes('brake-orbit'))) {
-      expect(Math.abs(endMembers(b, 'brake-orbit')[0].state0[4]!), b.family.id).toBeLessThan(20 * BRAKE_SPEED_ND);
+      const last = endMembers(b, 'brake-orbit')[0];
+      const vyHalf = odexFlow(mu, last.state0, last.period / 2, { tolerance: 1e-13 }).state[4]!;
+      expect(Math.min(Math.abs(last.state0[4]!), Math.abs(vyHalf)), b.family.id).toBeLessThan(20 * BRAKE_SPEED_ND);
     }
   });
 

@@ -1,6 +1,7 @@
 // The Poincaré section through an orbit's start point: y = 0, ẏ with the start's sign, x on the start's
 // segment of the x-axis (far side of the larger primary, between the primaries, far side of the smaller one).
 import type { AxisSegment } from '../orbits/family-job.ts';
+import { axisSegmentOf } from '../orbits/axis-segment-of.ts';
 
 export interface StartSection {
   mu: number;
@@ -25,7 +26,7 @@ export function startSection(mu: number, state0: ArrayLike<number>): StartSectio
   if (state0[4] === 0) throw new RangeError('state0 must cross y = 0 (ẏ ≠ 0)');
   const x0 = state0[0];
   if (x0 === -mu || x0 === 1 - mu) throw new RangeError(`state0 must not start on a primary (x = ${x0})`);
-  const segment: AxisSegment = x0 < -mu ? 'far-primary' : x0 < 1 - mu ? 'between' : 'far-secondary';
+  const segment = axisSegmentOf(mu, x0);
   const [xMinNd, xMaxNd] = segment === 'far-primary' ? [-Infinity, -mu] : segment === 'between' ? [-mu, 1 - mu] : [1 - mu, Infinity];
   return {
     mu, segment, xMinNd, xMaxNd, direction: state0[4] > 0 ? 1 : -1,

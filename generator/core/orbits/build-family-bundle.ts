@@ -1,7 +1,7 @@
 // Turns a continued, analysed family into catalog rows (nondimensional values plus km and days).
 import { familySummary } from './family-summary.ts';
 import { stableWindowRow } from './stable-window-row.ts';
-import type { BifurcationRow, FamilyBundle, FamilyKind, OrbitRow } from './family-rows.ts';
+import type { BifurcationRow, FamilyBundle, FamilyKind, OrbitRow, SignatureChangeRow } from './family-rows.ts';
 import type { EndReason } from './continue-family.ts';
 import type { FamilyMember } from './family-member.ts';
 import type { SystemSpec } from './family-job.ts';
@@ -55,8 +55,25 @@ export function orbitRowOf(system: SystemSpec, familyId: string, seq: number, me
   };
 }
 
+export interface FamilyEnds {
+  start: EndReason;
+  end: EndReason;
+  /** The first orbit past a 'signature-change' end (continue-family.ts). */
+  beyondStart?: FamilyMember;
+  beyondEnd?: FamilyMember;
+}
+
+/** The orbit past a signature-change end, as a row; the family it lies on is found by the run layer. */
+function signatureChangeRow(system: SystemSpec, familyId: string, side: 'start' | 'end', beyond: FamilyMember): SignatureChangeRow {
+  const row = orbitRowOf(system, familyId, 0, beyond);
+  return {
+    familyId, side, signature: row.signature, state0: row.state0, jacobi: row.jacobi, period: row.period,
+    periodDays: row.periodDays, intoFamilyId: null, followedUp: false,
+  };
+}
+
 export function buildFamilyBundle(
-  system: SystemSpec, identity: FamilyIdentity, map: StabilityMap, ends: { start: EndReason; end: EndReason },
+  system: SystemSpec, identity: FamilyIdentity, map: StabilityMap, ends: FamilyEnds,
 ): FamilyBundle {
   const id = identity.id;
   // Window middles join the member list so that every window names a stored orbit.
@@ -102,5 +119,9 @@ export function buildFamilyBundle(
     orbits,
     stableWindows,
     bifurcations,
+    signatureChanges: [
+      ...(ends.beyondStart ? [signatureChangeRow(system, id, 'start', ends.beyondStart)] : []),
+      ...(ends.beyondEnd ? [signatureChangeRow(system, id, 'end', ends.beyondEnd)] : []),
+    ],
   };
 }

@@ -46,6 +46,9 @@ export interface ContinuationResult {
   members: FamilyMember[];
   endReasonStart: EndReason;
   endReasonEnd: EndReason;
+  /** At a 'signature-change' end: the first corrected orbit past it, which has the new signature. */
+  beyondStart?: FamilyMember;
+  beyondEnd?: FamilyMember;
 }
 
 export interface ContinuationHooks {
@@ -72,8 +75,8 @@ export function memberFrom(context: AnalysisContext, corrected: CorrectedOrbit, 
 function endReasonOf(member: FamilyMember, direction: number, rules: ContinuationRules): EndReason | null {
   const a = member.analysis;
   // ẏ0 through zero: the start crossing reached the zero-velocity curve (a brake orbit there). The march
-  // goes on from the orbit's other crossing where it can; a family ends here only when both crossings
-  // are brake points. (Reference families shrink to their equilibrium there instead: not checked.)
+  // goes on from the orbit's other crossing where it can; a family ends here when that crossing is a
+  // brake point too or does not correct. (Reference families shrink to their equilibrium: not checked.)
   if (rules.laps && (member.vy0 * direction <= 0 || Math.abs(member.vy0) < BRAKE_SPEED_ND)) return 'brake-orbit';
   if (a.primaryMinDistanceNd < rules.primaryRadiusNd) return 'collision-primary';
   if (a.secondaryMinDistanceNd < rules.secondaryRadiusNd) return 'collision-secondary';
@@ -156,7 +159,7 @@ function acrossTangency(
 function march(
   context: AnalysisContext, start: FamilyMember, sign: 1 | -1, budget: number,
   rules: ContinuationRules, corrector: CorrectorOptions, hooks: ContinuationHooks, counted: { n: number },
-): { members: FamilyMember[]; end: EndReason } {
+): { members: FamilyMember[]; end: EndReason; beyond?: FamilyMember } {
   const members: FamilyMember[] = [];
   let current = start;
   let previous: FamilyMember | null = null;
@@ -171,20 +174,32 @@ function march(
     counted.n++;
     hooks.onMember?.(counted.n);
   };
-  /** Goes on from the current orbit's other crossing; false when that is not possible. */
-  const switchCrossing = (): boolean => {
-    if (switches >= MAX_CROSSING_SWITCHES || members.length >= budget) return false;
+  let justSwitched = false;
+  /**
+   * Goes on from the current orbit's other crossing: 'switched', 'precision-limit' when the orbit's two
+   * statements disagree on ν, or null when no switch is possible (never straight back to the crossing
+   * just left: that would store the same orbit again and again).
+   */
+  const switchCrossing = (): 'switched' | 'precision-limit' | null => {
+    if (justSwitched || switches >= MAX_CROSSING_SWITCHES || members.length >= budget) return null;
     const other = fromOtherCrossing(context, current, previous, corrector);
-    if (!other) return false;
+    if (!other) return null;
+    // One orbit has one monodromy: its two statements differing by more than the step rule allows mean
+    // double precision no longer resolves ν here (it grows faster than round-off can follow).
+    if (tooFar(current, other.member, rules)) return 'precision-limit';
     switches++;
     // The orbit is stored once more as stated from there, so that neighbours always share a crossing.
     accept(other.member);
+    justSwitched = true;
     previous = null;
     current = other.member;
     tangent = other.tangent;
     step = rules.initialStepNd;
-    return true;
+    return 'switched';
   };
+  /** Where no crossing corrects further: a brake point at either crossing is the family's own end. */
+  const stuckEnd = (): EndReason =>
+    rules.laps && Math.min(Math.abs(current.vy0), Math.abs(current.vyHalf)) < 10 * BRAKE_SPEED_ND ? 'brake-orbit' : 'no-convergence';
   for (;;) {
     if (members.length >= budget) return { members, end: 'member-limit' };
     if (hooks.shouldStop?.()) return { members, end: 'interrupted' };
@@ -209,8 +224,9 @@ function march(
         corrected = across.corrected;
         step = rules.initialStepNd;
       } else {
-        if (switchCrossing()) continue;
-        return { members, end: 'no-convergence' };
+        const switched = switchCrossing();
+        if (switched === 'switched') continue;
+        return { members, end: switched ?? stuckEnd() };
       }
     }
     const reason = endReasonOf(next, Math.sign(current.vy0), rules);
@@ -221,10 +237,17 @@ function march(
         continue;
       }
       // A brake orbit at this crossing only: the family goes on, followed from the other crossing.
-      if (reason === 'brake-orbit' && switchCrossing()) continue;
+      if (reason === 'brake-orbit') {
+        const switched = switchCrossing();
+        if (switched === 'switched') continue;
+        if (switched) return { members, end: switched };
+      }
+      // The orbit past a signature change is where the family continues into another one (kept to link them).
+      if (reason === 'signature-change') return { members, end: reason, beyond: next };
       return { members, end: reason };
     }
     accept(next);
+    justSwitched = false;
     tangent = familyTangent(corrected!.shot, tangent);
     if (rules.unstableStop) {
       unstableRun = Math.abs(next.analysis.stabilityIndex) > rules.unstableStop.indexAbove ? unstableRun + 1 : 0;
@@ -251,5 +274,7 @@ export function continueFamily(
     members: [...backward.members.reverse(), seed, ...forward.members],
     endReasonStart: backward.end,
     endReasonEnd: forward.end,
+    ...(backward.beyond ? { beyondStart: backward.beyond } : {}),
+    ...(forward.beyond ? { beyondEnd: forward.beyond } : {}),
   };
 }

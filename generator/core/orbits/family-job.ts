@@ -115,6 +115,12 @@ export interface JobHooks {
 export interface JobInputs {
   discovered?: readonly DiscoveryResult[];
   stored?: readonly StoredFamily[];
+  /**
+   * Orbits other families continue into (past a change of lap signature; state at t = 0 and period,
+   * nondimensional) that no catalogued family holds. When given, the job follows each as a family of
+   * its own and runs no seed search.
+   */
+  handoffs?: readonly { state0: readonly number[]; periodNd: number }[];
 }
 
 export interface JobResult {

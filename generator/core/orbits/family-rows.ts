@@ -83,6 +83,22 @@ export interface BifurcationRow {
   state0: [number, number, number, number, number, number];
 }
 
+/**
+ * A family end where the lap signature changes: the first corrected orbit past it (it has the new
+ * signature) and the catalogued family that orbit lies on, the one this family continues into.
+ */
+export interface SignatureChangeRow {
+  familyId: string;
+  side: 'start' | 'end';
+  signature: string; // of the orbit past the end
+  state0: [number, number, number, number, number, number];
+  jacobi: number;
+  period: number; // nondimensional
+  periodDays: number;
+  intoFamilyId: string | null; // null until the run has found (or continued) that family
+  followedUp: boolean; // a run has followed the orbit as a family of its own job (done once)
+}
+
 /** A family with everything under it, as written in one transaction. */
 export interface FamilyBundle {
   family: FamilyRow;
@@ -93,4 +109,6 @@ export interface FamilyBundle {
   holdRadii?: HoldRadiusRow[];
   /** Sun (bicircular) and eccentricity (elliptic) screenings of stable members. */
   modelScreenings?: ModelScreeningRow[];
+  /** Its ends where the lap signature changes (absent: none). */
+  signatureChanges?: SignatureChangeRow[];
 }

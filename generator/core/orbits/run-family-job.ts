@@ -20,7 +20,8 @@ import { jobDiscoveryRequests } from './discovery/job-discovery-requests.ts';
 import { candidatesOfSignature, orderCandidates } from './discovery/order-candidates.ts';
 import { refineCandidate } from './discovery/refine-candidate.ts';
 import { screenStableMembers } from './screen-stable-members.ts';
-import { asFamilyMembers } from './audit-footprint.ts';
+import { asFamilyMembers, storedOrbitFootprint } from './audit-footprint.ts';
+import { axisSegmentOf } from './axis-segment-of.ts';
 import { storedFamilyTrace } from './stored-family-trace.ts';
 
 interface Seed {
@@ -129,7 +130,9 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
     if (!map) return 'interrupted';
     const bundle = buildFamilyBundle(system, {
       id: `${system.id}/${label}/${letter}`, jobKey: job.key, name: rule.kind === 'lap-signature' ? `${job.name} (${letter})` : job.name, kind, signature: label, seedSegment: seed.segment,
-    }, map, { start: result.endReasonStart, end: result.endReasonEnd });
+    }, map, {
+      start: result.endReasonStart, end: result.endReasonEnd, beyondStart: result.beyondStart, beyondEnd: result.beyondEnd,
+    });
     if (job.screening && bundle.stableWindows.length > 0) {
       const screened = screenStableMembers(system, bundle, job.screening, tolerance, {
         // From the first member screened on: the displays read members 0 as "seed search".
@@ -167,6 +170,17 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
     return finish(false);
   }
 
+  if (inputs.handoffs) {
+    for (const handoff of inputs.handoffs) {
+      if (hooks.shouldStop?.()) return finish(true);
+      // The half period ends at the crossing count the orbit itself has (its mirror image is the other half).
+      const { halfCrossings } = storedOrbitFootprint(mu, handoff.state0, handoff.periodNd, tolerance);
+      const corrected = correctAtFixedX0(mu, halfCrossings, handoff.state0[0]!, handoff.state0[4]!, corrector);
+      const start = corrected && betterConditionedStart(mu, halfCrossings, corrected, corrector);
+      if (start && followSeed({ corrected: start, halfCrossings, segment: axisSegmentOf(mu, start.x0) }) === 'interrupted') return finish(true);
+    }
+    return finish(false);
+  }
   const discovered = inputs.discovered ?? discoverForJob(job, hooks);
   if (discovered === null) return finish(true);
   coverage = new FamilyCoverage(mu, new Map(discovered.map((d) => [FamilyCoverage.gridId(d.request.segment, d.request.direction), { xs: d.xs, levels: d.request.levels }])));

@@ -11,6 +11,7 @@ import { fileURLToPath } from 'node:url';
 import { resolveSystem } from '../../../generator/config/resolve-system.ts';
 import type { FamilyJob, JobResult, SystemSpec } from '../../../generator/core/orbits/family-job.ts';
 import { runFamilyJob } from '../../../generator/core/orbits/run-family-job.ts';
+import { lagrangePoints } from '../../../generator/core/cr3bp/lagrange-points.ts';
 
 export const EARTH_MOON: SystemSpec = resolveSystem({ preset: 'earth-moon' });
 
@@ -39,6 +40,22 @@ export const E1M1_JOB: FamilyJob = {
   },
   // Enough members for the family to run into the Moon at both ends.
   limits: { ...LIMITS, maxMembers: 120 },
+  tolerance: { rtol: 1e-12, atol: 1e-12 }, indexTolerance: 1e-6,
+};
+
+/**
+ * One E1M1 job on a small discovery grid (far side of the Earth, ẏ < 0, four levels from C = 3.09 to
+ * 3.152): a family that folds in C near C(L1) and changes signature at both ends, and families that end at
+ * the Moon's surface and at the zero-velocity curve (fold-and-ends, signature-change-links).
+ */
+export const FOLD_JOB: FamilyJob = {
+  key: 'test:E1M1-fold', name: 'E1M1 fold (test)', system: EARTH_MOON,
+  seed: {
+    // The half period of these orbits ends at the third crossing of y = 0 (beyond the Moon).
+    kind: 'lap-signature', signature: 'E1M1', segments: ['far-primary'], directions: [-1], maxHalfCrossings: 3, gridPoints: 300,
+    jacobiValues: [3.09, 3.12, 3.145, 3.152],
+  },
+  limits: { maxMembers: 2000, jacobiMin: 2.9, jacobiMax: lagrangePoints(EARTH_MOON.mu)[0]!.jacobi, maxPeriodNd: 40, unstableStop: null, initialStepNd: 1e-3, maxStepNd: 0.02 },
   tolerance: { rtol: 1e-12, atol: 1e-12 }, indexTolerance: 1e-6,
 };
 

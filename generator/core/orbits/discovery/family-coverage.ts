@@ -3,6 +3,7 @@
 // with the direction of ẏ there (same crossing count: the second half mirrors the first). A covered root
 // edge lies, to the grid's resolution, on a family already continued: discovery skips it.
 import type { AxisSegment } from '../family-job.ts';
+import { axisSegmentOf } from '../axis-segment-of.ts';
 
 /** One member of a family as the coverage reads it: both perpendicular crossings, ẏ there, and C. */
 export interface FamilyTracePoint {
@@ -18,10 +19,6 @@ export interface FamilyTracePoint {
 interface GridAxes {
   xs: readonly number[];
   levels: readonly number[];
-}
-
-function segmentOf(mu: number, x: number): AxisSegment {
-  return x < -mu ? 'far-primary' : x < 1 - mu ? 'between' : 'far-secondary';
 }
 
 /** Index of the cell [v[i], v[i+1]) holding value, or −1 outside the axis. */
@@ -99,7 +96,7 @@ interface CurvePoint {
 }
 
 function gridOf(mu: number, p: CurvePoint): string {
-  return FamilyCoverage.gridId(segmentOf(mu, p.x), p.vy >= 0 ? 1 : -1);
+  return FamilyCoverage.gridId(axisSegmentOf(mu, p.x), p.vy >= 0 ? 1 : -1);
 }
 
 function edgeKey(id: string, k: number, along: 'x' | 'jacobi', i: number, j: number): string {
