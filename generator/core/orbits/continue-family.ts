@@ -206,6 +206,7 @@ function march(
     const options = { ...corrector, maxTimeNd: Math.min(rules.maxPeriodNd, 3 * current.tHalfNd) };
     let corrected = correctOnArc(context.mu, current.halfCrossings, [current.x0, current.vy0], tangent, step, options);
     let next: FamilyMember | null = null;
+    let acrossCount = false;
     if (corrected) {
       try {
         next = memberFrom(context, corrected, current.arclength + sign * Math.hypot(corrected.x0 - current.x0, corrected.vy0 - current.vy0), tangent);
@@ -223,6 +224,7 @@ function march(
         next = across.member;
         corrected = across.corrected;
         step = rules.initialStepNd;
+        acrossCount = true;
       } else {
         const switched = switchCrossing();
         if (switched === 'switched') continue;
@@ -231,8 +233,10 @@ function march(
     }
     const reason = endReasonOf(next, Math.sign(current.vy0), rules);
     if (reason) {
-      // Close in on the boundary before giving up, so the family reaches as far as it truly goes.
-      if (step * 0.25 >= rules.minStepNd * 64) {
+      // Close in on the boundary before giving up, so the family reaches as far as it truly goes. Not when
+      // the step came from another crossing count: the old count cannot reach the boundary, and retrying
+      // it would fall back to the same step and the same end for ever.
+      if (!acrossCount && step * 0.25 >= rules.minStepNd * 64) {
         step *= 0.25;
         continue;
       }
