@@ -67,12 +67,13 @@ export async function linkSignatureChanges(options: LinkOptions): Promise<LinkSu
   for (let round = 0; round < MAX_ROUNDS; round++) {
     const view = readView(options.dbPath);
     if (view.pending.length === 0) break;
-    const bySignature = (systemId: string, signature: string) => view.families.filter((f) => f.systemId === systemId && f.signature === signature);
-    const targets = [...new Set(view.pending.map((c) => c.familyId))].flatMap((id) => {
-      const source = view.families.find((f) => f.id === id)!;
-      return view.pending.filter((c) => c.familyId === id).flatMap((c) => bySignature(source.systemId, c.signature));
-    });
-    const unmeasured = [...new Map(targets.map((f) => [f.id, f])).values()].filter((f) => !footprints.has(f.id));
+    const familyById = new Map(view.families.map((f) => [f.id, f]));
+    /** The families a change may continue into: its own system's, of its new signature. */
+    const targetsOf = (change: SignatureChangeRow) => {
+      const source = familyById.get(change.familyId)!;
+      return view.families.filter((f) => f.systemId === source.systemId && f.signature === change.signature);
+    };
+    const unmeasured = [...new Set(view.pending.flatMap(targetsOf))].filter((f) => !footprints.has(f.id));
     const progress = createRateProgress('signature changes: stored members measured', unmeasured.reduce((n, f) => n + f.memberCount, 0), options.log);
     let measured = 0;
     const reader = openCatalogForRead(options.dbPath);
@@ -89,10 +90,10 @@ export async function linkSignatureChanges(options: LinkOptions): Promise<LinkSu
     }
     const handoffs = new Map<FamilyJob, SignatureChangeRow[]>();
     for (const change of view.pending) {
-      const source = view.families.find((f) => f.id === change.familyId)!;
+      const source = familyById.get(change.familyId)!;
       const mu = view.mu.get(source.systemId)!;
       const orbit = storedOrbitFootprint(mu, change.state0, change.period, toleranceOf(source.configKey));
-      const candidates = bySignature(source.systemId, change.signature).map((f) => ({ id: f.id, members: footprints.get(f.id)! }));
+      const candidates = targetsOf(change).map((f) => ({ id: f.id, members: footprints.get(f.id)! }));
       const into = familyHolding(orbit, candidates);
       if (into !== null) {
         options.writer.linkSignatureChange(change.familyId, change.side, { intoFamilyId: into, followedUp: change.followedUp });

@@ -21,6 +21,9 @@ export const PRECISION_LIMIT_INDEX = 5e9;
 /** |ẏ0| below this (≈ 1 m/s in Earth–Moon units) is a start on the zero-velocity curve: a brake orbit. */
 export const BRAKE_SPEED_ND = 1e-3;
 
+/** |ẏ| at a crossing below this (≈ 10 m/s) is near enough the zero-velocity curve that y = 0 degenerates there. */
+const NEAR_BRAKE_SPEED_ND = 10 * BRAKE_SPEED_ND;
+
 export interface ContinuationRules {
   maxMembers: number;
   jacobiMin: number;
@@ -110,7 +113,7 @@ const MAX_CROSSING_SWITCHES = 8;
 function fromOtherCrossing(
   context: AnalysisContext, current: FamilyMember, previous: FamilyMember | null, corrector: CorrectorOptions,
 ): { member: FamilyMember; tangent: [number, number] } | null {
-  if (!(Math.abs(current.vyHalf) > 10 * BRAKE_SPEED_ND)) return null;
+  if (!(Math.abs(current.vyHalf) > NEAR_BRAKE_SPEED_ND)) return null;
   // The second half mirrors the first, so T/2 is the same crossing count from either end.
   const corrected = correctAtFixedX0(context.mu, current.halfCrossings, current.xHalf, current.vyHalf, corrector);
   if (!corrected) return null;
@@ -199,7 +202,7 @@ function march(
   };
   /** Where no crossing corrects further: a brake point at either crossing is the family's own end. */
   const stuckEnd = (): EndReason =>
-    rules.laps && Math.min(Math.abs(current.vy0), Math.abs(current.vyHalf)) < 10 * BRAKE_SPEED_ND ? 'brake-orbit' : 'no-convergence';
+    rules.laps && Math.min(Math.abs(current.vy0), Math.abs(current.vyHalf)) < NEAR_BRAKE_SPEED_ND ? 'brake-orbit' : 'no-convergence';
   for (;;) {
     if (members.length >= budget) return { members, end: 'member-limit' };
     if (hooks.shouldStop?.()) return { members, end: 'interrupted' };
