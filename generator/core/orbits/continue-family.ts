@@ -93,12 +93,31 @@ function endReasonOf(member: FamilyMember, direction: number, rules: Continuatio
   return null;
 }
 
-function tooFar(previous: FamilyMember, next: FamilyMember, rules: ContinuationRules): boolean {
+/** How far a step goes against the step rule: above 1 it changes an index or the period too much. */
+function stepExcess(previous: FamilyMember, next: FamilyMember, rules: ContinuationRules): number {
   const a = previous.analysis, b = next.analysis;
-  return Math.abs(Math.asinh(a.stabilityIndex) - Math.asinh(b.stabilityIndex)) > rules.maxIndexJump
-    || Math.abs(Math.asinh(a.verticalStabilityIndex) - Math.asinh(b.verticalStabilityIndex)) > rules.maxIndexJump
-    || Math.abs(a.periodNd - b.periodNd) > rules.maxPeriodJump * a.periodNd;
+  return Math.max(
+    Math.abs(Math.asinh(a.stabilityIndex) - Math.asinh(b.stabilityIndex)) / rules.maxIndexJump,
+    Math.abs(Math.asinh(a.verticalStabilityIndex) - Math.asinh(b.verticalStabilityIndex)) / rules.maxIndexJump,
+    Math.abs(a.periodNd - b.periodNd) / (rules.maxPeriodJump * a.periodNd),
+  );
 }
+
+function tooFar(previous: FamilyMember, next: FamilyMember, rules: ContinuationRules): boolean {
+  return stepExcess(previous, next, rules) > 1;
+}
+
+/**
+ * Closing in on an end stops at steps this short (nondimensional): the end is then located far below
+ * anything a user reads, and the finer minimum step is kept for steep stretches of a family.
+ */
+const CLOSE_IN_STEP_ND = 6.4e-8;
+
+/**
+ * A step's change of the indices falls in proportion to the step where ν is a smooth function along the
+ * family; when halving the step leaves more than this share of the change, ν is round-off at that scale.
+ */
+const SMOOTH_CHANGE_SHARE = 0.75;
 
 /** Changes of the starting crossing one march may make (each re-states one orbit from its other crossing). */
 const MAX_CROSSING_SWITCHES = 8;
@@ -177,6 +196,12 @@ function march(
     counted.n++;
     hooks.onMember?.(counted.n);
   };
+  /**
+   * Excess of the rejected steps from the current member, shortest last. A family can be very steep in ν
+   * (near-degenerate orbits: ν changes by 1e8 per unit of arclength) and still smooth: the minimum step
+   * lets the march pass such stretches, and the excesses tell a smooth stretch from round-off.
+   */
+  let rejected: number[] = [];
   let justSwitched = false;
   /**
    * Goes on from the current orbit's other crossing: 'switched', 'precision-limit' when the orbit's two
@@ -196,13 +221,21 @@ function march(
     justSwitched = true;
     previous = null;
     current = other.member;
+    rejected = [];
     tangent = other.tangent;
     step = rules.initialStepNd;
     return 'switched';
   };
-  /** Where no crossing corrects further: a brake point at either crossing is the family's own end. */
-  const stuckEnd = (): EndReason =>
-    rules.laps && Math.min(Math.abs(current.vy0), Math.abs(current.vyHalf)) < NEAR_BRAKE_SPEED_ND ? 'brake-orbit' : 'no-convergence';
+  /**
+   * Where no crossing corrects further: a brake point at either crossing is the family's own end; so is
+   * a change of ν that no longer falls with the step (ν is round-off there: the precision limit).
+   */
+  const stuckEnd = (): EndReason => {
+    if (rules.laps && Math.min(Math.abs(current.vy0), Math.abs(current.vyHalf)) < NEAR_BRAKE_SPEED_ND) return 'brake-orbit';
+    const [longer, shorter] = rejected.slice(-2);
+    if (longer !== undefined && shorter !== undefined && Number.isFinite(longer) && shorter > SMOOTH_CHANGE_SHARE * longer) return 'precision-limit';
+    return 'no-convergence';
+  };
   for (;;) {
     if (members.length >= budget) return { members, end: 'member-limit' };
     if (hooks.shouldStop?.()) return { members, end: 'interrupted' };
@@ -219,6 +252,7 @@ function march(
     }
     // Indices and period change continuously along a family: a jump that no step size removes is a breakdown.
     if (!next || tooFar(current, next, rules)) {
+      rejected.push(next ? stepExcess(current, next, rules) : Infinity);
       step *= 0.5;
       if (step >= rules.minStepNd) continue;
       // No step at this crossing count and start crossing: another count (a tangency), or the other crossing.
@@ -239,7 +273,7 @@ function march(
       // Close in on the boundary before giving up, so the family reaches as far as it truly goes. Not when
       // the step came from another crossing count: the old count cannot reach the boundary, and retrying
       // it would fall back to the same step and the same end for ever.
-      if (!acrossCount && step * 0.25 >= rules.minStepNd * 64) {
+      if (!acrossCount && step * 0.25 >= CLOSE_IN_STEP_ND) {
         step *= 0.25;
         continue;
       }
@@ -254,6 +288,7 @@ function march(
       return { members, end: reason };
     }
     accept(next);
+    rejected = [];
     justSwitched = false;
     tangent = familyTangent(corrected!.shot, tangent);
     if (rules.unstableStop) {

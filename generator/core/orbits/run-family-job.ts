@@ -64,7 +64,9 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
   }
   const rules: ContinuationRules = {
     ...limits,
-    minStepNd: 1e-9,
+    // Steep stretches need steps this short (ν can change by 1e8 per unit arclength near degenerate
+    // orbits); 1e-12 is still some 50 times the corrector's resolution of x0 and ẏ0.
+    minStepNd: 1e-12,
     maxIndexJump: 0.25,
     maxPeriodJump: 0.02,
     primaryRadiusNd,
