@@ -7,6 +7,7 @@ import { computeResidualGrid, type GridProgress } from './residual-grid.ts';
 import type { ZeroCandidate } from './zero-candidate.ts';
 import { zeroSetCandidates } from './zero-set-candidates.ts';
 import { jumpEdgeCandidates } from './jump-edge-candidates.ts';
+import { zeroVelocityEdgeCandidates } from './zero-velocity-edge-candidates.ts';
 
 /** One grid: the scan options (loose tolerance: signs, crossing times and laps only) plus its axes. */
 export interface DiscoveryRequest extends ScanOptions {
@@ -56,5 +57,8 @@ export function discoverCandidates(request: DiscoveryRequest, progress: GridProg
   const firstPiece = onGrid.reduce((most, c) => Math.max(most, c.piece + 1), 0);
   const withinEdges = jumpEdgeCandidates(grid, options, firstPiece, progress.shouldStop);
   if (!withinEdges) return { request, gridPoints, xs, candidates: [], interrupted: true };
-  return { request, gridPoints, xs, candidates: [...onGrid, ...withinEdges], interrupted: false };
+  const nextPiece = withinEdges.reduce((most, c) => Math.max(most, c.piece + 1), firstPiece);
+  const atCurve = zeroVelocityEdgeCandidates(grid, options, nextPiece, progress.shouldStop);
+  if (!atCurve) return { request, gridPoints, xs, candidates: [], interrupted: true };
+  return { request, gridPoints, xs, candidates: [...onGrid, ...withinEdges, ...atCurve], interrupted: false };
 }
