@@ -1,25 +1,28 @@
 // Discovery finds orbits that start close to a brake orbit, whose roots sit in the last grid cell before the
-// zero-velocity curve. The orbit checked: Earth–Moon E1M2, C = 3.1015161751, x0 = −0.841537634886296,
-// ẏ0 = −0.0455237200150587 (a member an earlier audit of the demo reported missing; T/2 = 10.26422345).
-// That it is a symmetric periodic orbit is checked here with odex (npm reference integrator): a perpendicular
-// crossing of the x-axis at T/2 (mirror theorem, Roy & Ovenden 1955). The zero-velocity curve is where the
-// start speed vanishes, 2Ω(x, 0) = C (Szebehely 1967, ch. 4).
+// zero-velocity curve, where the grid has no second point. At Earth–Moon C = 3.1015161751 (a level where an
+// earlier audit of the demo reported near-brake E1M2 orbits missing), far side of the Earth, ẏ0 < 0, 300 start
+// points: the grid alone has no E1M2 root of crossing count 4 in the cell that borders the curve; the curve
+// cell's samples give one, and it corrects to a symmetric periodic orbit that starts inside that cell. The
+// orbit is checked with odex (npm reference integrator): a perpendicular crossing of the x-axis at T/2 (mirror
+// theorem, Roy & Ovenden 1955). The zero-velocity curve is where the start speed vanishes, 2Ω(x, 0) = C
+// (Szebehely 1967, ch. 4).
 import { describe, expect, it } from 'vitest';
 import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
 import { axisSpeedSquared } from '../../generator/core/cr3bp/axis-speed-squared.ts';
 import { computeResidualGrid } from '../../generator/core/orbits/discovery/residual-grid.ts';
 import { zeroSetCandidates } from '../../generator/core/orbits/discovery/zero-set-candidates.ts';
 import { zeroVelocityEdgeCandidates } from '../../generator/core/orbits/discovery/zero-velocity-edge-candidates.ts';
+import type { ZeroCandidate } from '../../generator/core/orbits/discovery/zero-candidate.ts';
 import { residualOptionsOf, type DiscoveryRequest } from '../../generator/core/orbits/discovery/discover-candidates.ts';
 import { segmentGrid } from '../../generator/core/orbits/scan-axis-segment.ts';
+import { refineCandidate } from '../../generator/core/orbits/discovery/refine-candidate.ts';
+import { correctAtFixedX0, type CorrectorOptions } from '../../generator/core/orbits/correct-on-arc.ts';
 import { EARTH_MOON } from './helpers/earth-moon-jobs.ts';
 import { odexFlow } from './helpers/odex-flow.ts';
 
 const JACOBI = 3.1015161751;
-const X0 = -0.841537634886296;
-const VY0 = -0.0455237200150587;
-const HALF_PERIOD_ND = 10.26422345;
 const HALF_CROSSINGS = 4;
+const CORRECTOR: CorrectorOptions = { rtol: 1e-12, atol: 1e-12, maxTimeNd: 40, residualTolerance: 2e-11, maxIterations: 12 };
 
 const REQUEST: DiscoveryRequest = {
   mu: EARTH_MOON.mu, segment: 'far-primary', direction: -1, gridPoints: 300, levels: [JACOBI], maxHalfCrossings: HALF_CROSSINGS,
@@ -33,25 +36,26 @@ describe('roots between the last grid point and the zero-velocity curve', () => 
   const options = { ...residualOptionsOf(REQUEST), xL1: REQUEST.xL1 };
   const grid = computeResidualGrid(REQUEST.mu, REQUEST.segment, REQUEST.direction, xs, REQUEST.levels, HALF_CROSSINGS, options)!;
   const reachable = (x: number) => axisSpeedSquared(EARTH_MOON.mu, x, JACOBI) > 0;
-  const lastCell = xs.findIndex((x, i) => i + 1 < xs.length && reachable(x) !== reachable(xs[i + 1]!) && Math.abs(x - X0) < 0.02);
+  // The cell whose outer end lies beyond the curve, on the Earth's far side near x = −0.84.
+  const cell = xs.findIndex((x, i) => i + 1 < xs.length && reachable(x) !== reachable(xs[i + 1]!) && Math.abs(x + 0.84) < 0.02);
+  const [cellLow, cellHigh] = [xs[cell]!, xs[cell + 1]!].sort((p, q) => p - q) as [number, number];
+  const inCell = (x: number) => x > cellLow && x < cellHigh;
+  const isE1M2 = (c: ZeroCandidate) => c.halfCrossings === HALF_CROSSINGS && c.laps.some((l) => l.primaryLaps === 1 && l.secondaryLaps === 2);
 
-  it('the orbit is symmetric periodic (odex) and starts inside the cell that borders the curve', () => {
-    const half = odexFlow(EARTH_MOON.mu, [X0, 0, 0, 0, VY0, 0], HALF_PERIOD_ND).state;
-    expect(Math.abs(half[1]!)).toBeLessThan(1e-7);
-    expect(Math.abs(half[3]!)).toBeLessThan(1e-7);
-    expect(lastCell).toBeGreaterThanOrEqual(0);
-    const [a, b] = [xs[lastCell]!, xs[lastCell + 1]!].sort((p, q) => p - q);
-    expect(X0).toBeGreaterThan(a!);
-    expect(X0).toBeLessThan(b!);
+  it('the grid alone has no E1M2 root of that crossing count in the cell that borders the curve', () => {
+    expect(cell).toBeGreaterThanOrEqual(0);
+    expect(zeroSetCandidates(grid).filter((c) => isE1M2(c) && inCell(c.x0Guess))).toEqual([]);
   });
 
-  it('the grid alone has no root there; the curve cell has it, with the signature E1M2', () => {
-    const near = (x: number) => Math.abs(x - X0) < 2e-3;
-    const onGrid = zeroSetCandidates(grid).filter((c) => c.halfCrossings === HALF_CROSSINGS && near(c.x0Guess));
-    expect(onGrid).toEqual([]);
-    const atCurve = zeroVelocityEdgeCandidates(grid, options, 0).filter((c) => c.halfCrossings === HALF_CROSSINGS && near(c.x0Guess));
-    expect(atCurve.length).toBe(1);
-    expect(atCurve[0]!.laps).toContainEqual({ primaryLaps: 1, secondaryLaps: 2 });
-    expect(atCurve[0]!.withinEdge).toBe(true);
+  it('the curve cell gives one, which corrects to a symmetric periodic orbit starting inside the cell (odex)', () => {
+    const atCurve = zeroVelocityEdgeCandidates(grid, options, 0).filter((c) => isE1M2(c) && inCell(c.x0Guess));
+    expect(atCurve.length).toBeGreaterThanOrEqual(1);
+    const root = refineCandidate(EARTH_MOON.mu, atCurve[0]!, residualOptionsOf(REQUEST))!;
+    const orbit = correctAtFixedX0(EARTH_MOON.mu, HALF_CROSSINGS, root.x0, root.vy0, CORRECTOR)!;
+    expect(orbit).not.toBeNull();
+    expect(inCell(orbit.x0)).toBe(true);
+    const half = odexFlow(EARTH_MOON.mu, [orbit.x0, 0, 0, 0, orbit.vy0, 0], orbit.shot.tHalfNd).state;
+    expect(Math.abs(half[1]!)).toBeLessThan(1e-8);
+    expect(Math.abs(half[3]!)).toBeLessThan(1e-8);
   });
 });
