@@ -26,16 +26,18 @@ export interface SearchSettings {
 
 /**
  * Discovery grid: crossing counts up to 8 (the half period of an E3M3 cycler crosses y = 0 up to 8 times),
- * 300 start points per segment and 64 levels from the lowest C of the family limits up
- * to 1e-5 below C(L1). Doubling either (128 × 300, 64 × 600) finds the same Earth–Moon families of every
- * signature E1M1…E3M3 (bench/discovery-convergence.ts); the grid costs about 20 s per system on 2 cores.
+ * 600 start points per segment and 256 levels from the lowest C of the family limits up to 1e-5 below C(L1)
+ * (level spacing about 0.005 in C at C(L1) − C = 0.1). Measured by `audit --seed 4242` on Earth–Moon E1M2
+ * alone: the earlier 64 × 300 grid left 14 of 42 audited orbits on no family, 192 × 300 left 9, 256 × 600
+ * (with the zero-velocity cells) leaves 4, all near-brake orbits whose roots lie within 1e-4 of a
+ * collision with the Earth. The grid costs about 110 s per system on 2 cores.
  */
 export const DEFAULT_SEARCH: SearchSettings = {
   segments: [...ALL_SEGMENTS],
   directions: [1, -1],
   maxHalfCrossings: 8,
-  gridPoints: 300,
-  jacobiLevels: 64,
+  gridPoints: 600,
+  jacobiLevels: 256,
   jacobiGapBelowL1: 1e-5,
 };
 

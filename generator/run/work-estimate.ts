@@ -6,7 +6,7 @@ import { sharedDiscoveryGrids } from './shared-discovery.ts';
 import type { FamilyJob } from '../core/orbits/family-job.ts';
 import { UsageError } from '../errors/usage-error.ts';
 
-/** Grid points × crossings above which a run needs --force (the demo's grids need 1.8e6). */
+/** Grid points × crossings above which a run needs --force (the demo's grids need 1.5e7). */
 export const MAX_GRID_WORK = 2e8;
 /** CPU seconds per grid point and crossing (bench/discovery.ts on these machines, rounded up). */
 const SECONDS_PER_POINT_CROSSING = 5e-5;

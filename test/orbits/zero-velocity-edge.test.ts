@@ -48,7 +48,7 @@ describe('roots between the last grid point and the zero-velocity curve', () => 
   });
 
   it('the curve cell gives one, which corrects to a symmetric periodic orbit starting inside the cell (odex)', () => {
-    const atCurve = zeroVelocityEdgeCandidates(grid, options, 0).filter((c) => isE1M2(c) && inCell(c.x0Guess));
+    const atCurve = zeroVelocityEdgeCandidates(grid, options, 0)!.filter((c) => isE1M2(c) && inCell(c.x0Guess));
     expect(atCurve.length).toBeGreaterThanOrEqual(1);
     const root = refineCandidate(EARTH_MOON.mu, atCurve[0]!, residualOptionsOf(REQUEST))!;
     const orbit = correctAtFixedX0(EARTH_MOON.mu, HALF_CROSSINGS, root.x0, root.vy0, CORRECTOR)!;
