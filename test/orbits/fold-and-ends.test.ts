@@ -1,8 +1,8 @@
 // Families are followed through folds of C and end only for reasons of their own. One E1M1 job on a
 // small discovery grid (far side of the Earth, ẏ < 0, four levels from C = 3.09 to 3.152) yields a
 // family that turns back in C at C ≈ 3.1512 with narrow stable windows at the fold, and families that
-// end at the Moon's surface and at a change of lap signature, and that pass brake points of one of their
-// two perpendicular crossings (followed on from the other crossing).
+// end at the Moon's surface, and that pass brake points of one of their two perpendicular crossings
+// (followed on from the other crossing); an E1M2 family (SIGNATURE_CHANGE_JOB) ends at a change of signature.
 // Checks: the members on both sides of a fold are periodic (mirror theorem, Roy & Ovenden 1955: ẋ = 0
 // at T/2, checked with odex, an independent integrator on npm); a collision end's last member comes
 // within one continuation step of the body's radius (IAU mean lunar radius 1737.4 km, from memory); a
@@ -16,7 +16,8 @@ import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
 import { BRAKE_SPEED_ND } from '../../generator/core/orbits/continue-family.ts';
 import { correctOnArc } from '../../generator/core/orbits/correct-on-arc.ts';
 import { formatSignature } from '../../generator/core/orbits/lap-signature.ts';
-import { EARTH_MOON, FOLD_JOB, jobResult } from './helpers/earth-moon-jobs.ts';
+import { storedOrbitFootprint } from '../../generator/core/orbits/audit-footprint.ts';
+import { EARTH_MOON, FOLD_JOB, SIGNATURE_CHANGE_INPUTS, SIGNATURE_CHANGE_JOB, jobResult } from './helpers/earth-moon-jobs.ts';
 import { odexFlow } from './helpers/odex-flow.ts';
 
 const mu = EARTH_MOON.mu;
@@ -92,22 +93,27 @@ describe('folds and natural ends (one small E1M1 job)', () => {
   });
 
   it('ends at a signature change where the next member along the family has another signature', () => {
-    const changed = bundles.filter((b) => ends(b).includes('signature-change'));
+    const changed = jobResult(SIGNATURE_CHANGE_JOB, SIGNATURE_CHANGE_INPUTS).bundles.filter((b) => ends(b).includes('signature-change'));
     expect(changed.length).toBeGreaterThan(0);
     const corrector = { rtol: 1e-12, atol: 1e-12, maxTimeNd: 40, residualTolerance: 2e-11, maxIterations: 12 };
     for (const b of changed) {
-      const [last, previous] = endMembers(b, 'signature-change');
+      const [last] = endMembers(b, 'signature-change');
+      // The members close in on the end in steps down to 1e-12: the direction is taken from the first
+      // member at least 1e-5 away, and the next member is sought up to 1e-3 beyond the end.
+      const inward = b.family.endReasonEnd === 'signature-change' ? [...b.orbits].reverse() : b.orbits;
+      const previous = inward.find((o) => Math.hypot(o.state0[0]! - last.state0[0]!, o.state0[4]! - last.state0[4]!) > 1e-5)!;
       const dx = last.state0[0]! - previous.state0[0]!, dv = last.state0[4]! - previous.state0[4]!;
-      const length = Math.hypot(dx, dv);
-      // Along the secant beyond the end member, as far as the last step and a little less.
+      const unit = 1 / Math.hypot(dx, dv);
+      // Along the secant beyond the end member, 1e-3 and less.
       const signatures = [1, 0.5, 0.25].flatMap((f) => {
-        const next = correctOnArc(mu, 3, [last.state0[0]!, last.state0[4]!], [dx / length, dv / length], f * length, corrector);
+        const { halfCrossings } = storedOrbitFootprint(mu, last.state0, last.period, { rtol: 1e-12, atol: 1e-12 });
+        const next = correctOnArc(mu, halfCrossings, [last.state0[0]!, last.state0[4]!], [dx * unit, dv * unit], f * 1e-3, corrector);
         if (!next) return [];
         const a = analyseOrbit({ mu, xL1, rtol: 1e-12, atol: 1e-12 }, next.x0, next.vy0, 2 * next.shot.tHalfNd);
         return [formatSignature('E', 'M', a.laps) + (a.l1Passages === 0 ? '/no-L1' : '')];
       });
       expect(signatures.length, b.family.id).toBeGreaterThan(0);
-      expect(signatures.some((s) => s !== 'E1M1'), `${b.family.id}: ${signatures.join(' ')}`).toBe(true);
+      expect(signatures.some((s) => s !== b.family.signature), `${b.family.id}: ${signatures.join(' ')}`).toBe(true);
     }
   });
 });

@@ -1,9 +1,10 @@
 // Where a family's lap signature changes, the catalog records the first orbit past that end and the family
-// it continues into. The small E1M1 fold job (helpers/earth-moon-jobs.ts) changes to E2M1 at both ends.
+// it continues into. The E1M2 family of helpers/earth-moon-jobs.ts (SIGNATURE_CHANGE_JOB) becomes E1M0 at its
+// low-C end.
 // Checks: the orbit past the end is a periodic orbit (mirror theorem, Roy & Ovenden 1955: ẋ = 0 at T/2,
-// checked with odex, an independent integrator on npm) with the new signature; with an E2M1 job in the run that
-// has no family yet, the linking pass follows the hand-off as an E2M1 family, links the E1M1 end to it, and
-// links that family's own change back to the E1M1 family (one boundary seen from both sides: common practice).
+// checked with odex, an independent integrator on npm) with the new signature; with an E1M0 job in the run that
+// has no family yet, the linking pass follows the hand-off as an E1M0 family, links the E1M2 end to it, and
+// links that family's own change back to the E1M2 family (one boundary seen from both sides: common practice).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openCatalogForRead, openCatalogForWrite } from '../../catalog-db/open-catalog.ts';
 import type { FamilyBundle, SignatureChangeRow } from '../../catalog-db/types.ts';
@@ -15,7 +16,7 @@ import { linkSignatureChanges, type LinkSummary } from '../../generator/run/link
 import { createFamilyPool, type FamilyPool } from '../../generator/run/worker-pool.ts';
 import { makeRunInput } from '../catalog-db/make-rows.ts';
 import { useTempCatalogDir } from '../catalog-db/temp-catalog-path.ts';
-import { EARTH_MOON, FOLD_JOB, jobResult } from './helpers/earth-moon-jobs.ts';
+import { EARTH_MOON, SIGNATURE_CHANGE_INPUTS, SIGNATURE_CHANGE_JOB, jobResult } from './helpers/earth-moon-jobs.ts';
 import { odexFlow } from './helpers/odex-flow.ts';
 
 const mu = EARTH_MOON.mu;
@@ -25,7 +26,7 @@ const tempPath = useTempCatalogDir();
 describe('signature changes: the orbit past the end and the family it continues into', () => {
   let bundles: FamilyBundle[];
   beforeAll(() => {
-    bundles = jobResult(FOLD_JOB).bundles;
+    bundles = jobResult(SIGNATURE_CHANGE_JOB, SIGNATURE_CHANGE_INPUTS).bundles;
   });
 
   it('records, at each signature-change end, a periodic orbit with another signature', () => {
@@ -54,7 +55,7 @@ describe('signature changes: the orbit past the end and the family it continues 
     let families: { id: string; signature: string; configKey: string }[];
     const target = (): FamilyJob => {
       const signature = bundles.flatMap((b) => b.signatureChanges ?? [])[0]!.signature;
-      return { ...FOLD_JOB, key: `test:${signature}-handoff`, name: `${signature} (test)`, seed: { ...FOLD_JOB.seed, signature, jacobiValues: [3.1] } as FamilyJob['seed'] };
+      return { ...SIGNATURE_CHANGE_JOB, key: `test:${signature}-handoff`, name: `${signature} (test)`, seed: { ...SIGNATURE_CHANGE_JOB.seed, signature } as FamilyJob['seed'] };
     };
     beforeAll(async () => {
       const path = tempPath('links.sqlite');
@@ -64,10 +65,10 @@ describe('signature changes: the orbit past the end and the family it continues 
         writer.upsertSystem(EARTH_MOON);
         const runId = writer.startRun(makeRunInput());
         for (const b of bundles) writer.writeFamily({ ...b, family: { ...b.family, runId } });
-        writer.markJobDone(FOLD_JOB, runId);
+        writer.markJobDone(SIGNATURE_CHANGE_JOB, runId);
         writer.markJobDone(job, runId); // done, with no family: the hand-off is all it gets
         summary = await linkSignatureChanges({
-          dbPath: path, writer, runId, jobs: [FOLD_JOB, job], log: () => {}, pool: () => (pool ??= createFamilyPool(1)),
+          dbPath: path, writer, runId, jobs: [SIGNATURE_CHANGE_JOB, job], log: () => {}, pool: () => (pool ??= createFamilyPool(1)),
         });
       } finally {
         writer.close();
@@ -85,20 +86,20 @@ describe('signature changes: the orbit past the end and the family it continues 
       const job = target();
       expect(summary.followed).toBeGreaterThan(0);
       expect(summary.familiesWritten).toBeGreaterThan(0);
-      const fromFold = changes.filter((c) => bundles.some((b) => b.family.id === c.familyId));
-      for (const c of fromFold) {
+      const fromSource = changes.filter((c) => bundles.some((b) => b.family.id === c.familyId));
+      for (const c of fromSource) {
         expect(c.followedUp || c.intoFamilyId !== null, `${c.familyId} ${c.side}`).toBe(true);
         if (c.intoFamilyId === null) continue;
         const into = families.find((f) => f.id === c.intoFamilyId)!;
         expect(into.signature).toBe(c.signature);
         expect(into.configKey).toBe(job.key);
       }
-      expect(fromFold.some((c) => c.intoFamilyId !== null)).toBe(true);
+      expect(fromSource.some((c) => c.intoFamilyId !== null)).toBe(true);
     });
 
     it('links the new family\'s change back to the family it came from', () => {
-      const foldIds = new Set(bundles.map((b) => b.family.id));
-      const reverse = changes.filter((c) => !foldIds.has(c.familyId) && c.intoFamilyId !== null && foldIds.has(c.intoFamilyId));
+      const sourceIds = new Set(bundles.map((b) => b.family.id));
+      const reverse = changes.filter((c) => !sourceIds.has(c.familyId) && c.intoFamilyId !== null && sourceIds.has(c.intoFamilyId));
       expect(reverse.length, JSON.stringify(changes.map((c) => [c.familyId, c.side, c.signature, c.intoFamilyId]))).toBeGreaterThan(0);
     });
   });

@@ -77,26 +77,39 @@ function summariseEvents(mu: number, x0: number, vy0: number, periodNd: number, 
 }
 
 /**
- * Lap counts and neck passages only, from half a period without the STM: a cheap screen before a seed is
- * corrected. By the mirror theorem the second half repeats the first half's crossings mirrored in y,
- * which keep their x and ẏ, so the half-period events count twice and the T/2 crossing once.
+ * Lap counts and neck passages of the whole period from its first half: by the mirror theorem the second
+ * half repeats the first half's crossings mirrored in y, which keep their x and ẏ, so the first half's
+ * events count twice, the start once (summariseEvents counts it with the first half) and the T/2 crossing
+ * once. Counting a full propagation instead is fragile for very unstable orbits: its return to the start
+ * drifts in time (by 2.7e-3 TU for ν ≈ 1e7 near a brake orbit), so the start crossing is counted twice.
  */
+function mirroredCounts(mu: number, x0: number, vy0: number, half: EventSummary, turn: AxisCrossing): { laps: LapCounts; l1Passages: number } {
+  const turnLaps = countLaps(mu, [turn]);
+  const start = countLaps(mu, [{ x: x0, vy: vy0 }]);
+  return {
+    laps: {
+      primaryLaps: 2 * half.laps.primaryLaps - start.primaryLaps + turnLaps.primaryLaps,
+      secondaryLaps: 2 * half.laps.secondaryLaps - start.secondaryLaps + turnLaps.secondaryLaps,
+    },
+    l1Passages: 2 * half.l1Passages,
+  };
+}
+
+/** Lap counts and neck passages only, from half a period without the STM: a cheap screen before a seed is corrected. */
 export function screenOrbit(context: AnalysisContext, x0: number, vy0: number, periodNd: number): { laps: LapCounts; l1Passages: number } {
   const { mu, xL1 } = context;
   const state0 = [x0, 0, 0, 0, vy0, 0];
   const events = eventsFor(mu, xL1, neckHalfWidth(mu, xL1, jacobiConstant(mu, state0)));
   const halfNd = periodNd / 2;
   const run = propagate(mu, state0, halfNd, { rtol: context.rtol, atol: context.atol, events });
-  const half = summariseEvents(mu, x0, vy0, halfNd, run.events);
-  const turn = countLaps(mu, [{ x: run.state[0], vy: run.state[4] }]);
-  const start = countLaps(mu, [{ x: x0, vy: vy0 }]);
-  return {
-    laps: {
-      primaryLaps: 2 * half.laps.primaryLaps - start.primaryLaps + turn.primaryLaps,
-      secondaryLaps: 2 * half.laps.secondaryLaps - start.secondaryLaps + turn.secondaryLaps,
-    },
-    l1Passages: 2 * half.l1Passages,
-  };
+  return mirroredCounts(mu, x0, vy0, summariseEvents(mu, x0, vy0, halfNd, run.events), { x: run.state[0], vy: run.state[4] });
+}
+
+/** The crossing of y = 0 nearest to T/2 (the orbit's other perpendicular crossing). */
+function turnCrossing(events: readonly EventHit[], halfNd: number): AxisCrossing | null {
+  let best: EventHit | null = null;
+  for (const e of events) if (e.label === 'y=0' && (!best || Math.abs(e.tNd - halfNd) < Math.abs(best.tNd - halfNd))) best = e;
+  return best ? { x: best.state[0], vy: best.state[4] } : null;
 }
 
 export function analyseOrbit(context: AnalysisContext, x0: number, vy0: number, periodNd: number): OrbitAnalysis {
@@ -109,6 +122,11 @@ export function analyseOrbit(context: AnalysisContext, x0: number, vy0: number, 
   const monodromy = run.stm!;
   const indices = stabilityIndices(monodromy);
   const summary = summariseEvents(mu, x0, vy0, periodNd, run.events);
+  const halfNd = periodNd / 2;
+  const turn = turnCrossing(run.events, halfNd);
+  const counts = turn
+    ? mirroredCounts(mu, x0, vy0, summariseEvents(mu, x0, vy0, halfNd, run.events.filter((e) => e.tNd < halfNd)), turn)
+    : { laps: summary.laps, l1Passages: summary.l1Passages };
   return {
     state0,
     periodNd,
@@ -120,8 +138,8 @@ export function analyseOrbit(context: AnalysisContext, x0: number, vy0: number, 
     primaryMinDistanceNd: summary.primaryMin,
     secondaryMinDistanceNd: summary.secondaryMin,
     maxDistanceNd: summary.farthest,
-    l1Passages: summary.l1Passages,
-    laps: summary.laps,
+    l1Passages: counts.l1Passages,
+    laps: counts.laps,
     ...orbitCheck(mu, state0, end),
   };
 }

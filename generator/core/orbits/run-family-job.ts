@@ -39,13 +39,20 @@ function clearance(mu: number, x: number): number {
 
 /**
  * A symmetric orbit has two perpendicular crossings; the family is continued from the one farther from the
- * primaries, where the half-period shot is least sensitive (the other half is its mirror image).
+ * primaries, where the half-period shot is least sensitive (the other half is its mirror image). Where that
+ * crossing lies near the zero-velocity curve the correction there can fail or slide onto a neighbouring
+ * root (near-brake orbits crowd): then the orbit is kept as found.
  */
-function betterConditionedStart(mu: number, halfCrossings: number, orbit: CorrectedOrbit, corrector: CorrectorOptions): CorrectedOrbit | null {
+function betterConditionedStart(mu: number, halfCrossings: number, orbit: CorrectedOrbit, corrector: CorrectorOptions): CorrectedOrbit {
   const xHalf = orbit.shot.state[0];
   if (clearance(mu, xHalf) <= clearance(mu, orbit.x0)) return orbit;
-  return correctAtFixedX0(mu, halfCrossings, xHalf, orbit.shot.state[3], corrector);
+  const mirrored = correctAtFixedX0(mu, halfCrossings, xHalf, orbit.shot.state[3], corrector);
+  const sameOrbit = mirrored && Math.abs(mirrored.shot.tHalfNd - orbit.shot.tHalfNd) <= SAME_HALF_PERIOD_ND * Math.max(1, orbit.shot.tHalfNd);
+  return sameOrbit ? mirrored : orbit;
 }
+
+/** Half periods this close (relative) belong to one orbit seen from its two crossings. */
+const SAME_HALF_PERIOD_ND = 1e-6;
 
 export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobInputs = {}): JobResult {
   const { system, seed: rule, limits, tolerance } = job;
@@ -111,6 +118,8 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
     if (isKnown(start)) return 'known';
     if (laps && (a.laps.primaryLaps !== laps.primaryLaps || a.laps.secondaryLaps !== laps.secondaryLaps || a.l1Passages === 0)) return 'rejected';
     if (a.primaryMinDistanceNd < primaryRadiusNd || a.secondaryMinDistanceNd < secondaryRadiusNd) return 'rejected';
+    // Corrected at fixed x0, a seed can land outside the range; a family that enters it has seeds inside.
+    if (a.jacobi < limits.jacobiMin || a.jacobi > limits.jacobiMax) return 'rejected';
 
     const letter = familyLetter(continued.length);
     const familyLabel = `${label}/${letter}`;

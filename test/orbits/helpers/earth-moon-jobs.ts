@@ -9,7 +9,7 @@ import { tmpdir } from 'node:os';
 import { dirname, join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { resolveSystem } from '../../../generator/config/resolve-system.ts';
-import type { FamilyJob, JobResult, SystemSpec } from '../../../generator/core/orbits/family-job.ts';
+import type { FamilyJob, JobInputs, JobResult, SystemSpec } from '../../../generator/core/orbits/family-job.ts';
 import { runFamilyJob } from '../../../generator/core/orbits/run-family-job.ts';
 import { lagrangePoints } from '../../../generator/core/cr3bp/lagrange-points.ts';
 
@@ -59,6 +59,21 @@ export const FOLD_JOB: FamilyJob = {
   tolerance: { rtol: 1e-12, atol: 1e-12 }, indexTolerance: 1e-6,
 };
 
+/**
+ * An E1M2 family (72 members, C ≈ 2.874 … 3.051) that loses its lunar laps at its low-C end, where it
+ * becomes E1M0: followed from one member's start state (x0, ẏ0, period; from an earlier run of this
+ * project, only a start for Newton) as a hand-off, so no discovery grid is needed.
+ */
+export const SIGNATURE_CHANGE_JOB: FamilyJob = {
+  key: 'test:E1M2-change', name: 'E1M2 signature change (test)', system: EARTH_MOON,
+  seed: { kind: 'lap-signature', signature: 'E1M2', segments: ['far-primary'], directions: [1], maxHalfCrossings: 8, gridPoints: 300, jacobiValues: [3.0] },
+  limits: { ...FOLD_JOB.limits, jacobiMin: 2.8 },
+  tolerance: { rtol: 1e-12, atol: 1e-12 }, indexTolerance: 1e-6,
+};
+export const SIGNATURE_CHANGE_INPUTS: JobInputs = {
+  handoffs: [{ state0: [-3.9837657157876185, 0, 0, 0, 3.661153087141796, 0], periodNd: 36.21589647976107 }],
+};
+
 const CORE_DIR = join(dirname(fileURLToPath(import.meta.url)), '../../../generator/core');
 const CACHE_DIR = join(tmpdir(), 'cycler-atlas-test-orbits');
 const memo = new Map<string, JobResult>();
@@ -69,21 +84,21 @@ function sourceFiles(dir: string): string[] {
     .sort();
 }
 
-function cacheKey(job: FamilyJob): string {
-  const hash = createHash('sha256').update(JSON.stringify(job));
+function cacheKey(job: FamilyJob, inputs: JobInputs): string {
+  const hash = createHash('sha256').update(JSON.stringify(job)).update(JSON.stringify(inputs));
   for (const file of sourceFiles(CORE_DIR)) hash.update(relative(CORE_DIR, file)).update(readFileSync(file));
   return hash.digest('hex').slice(0, 32);
 }
 
-export function jobResult(job: FamilyJob): JobResult {
-  const key = cacheKey(job);
+export function jobResult(job: FamilyJob, inputs: JobInputs = {}): JobResult {
+  const key = cacheKey(job, inputs);
   let result = memo.get(key);
   if (result) return result;
   const path = join(CACHE_DIR, `${key}.json`);
   try {
     result = JSON.parse(readFileSync(path, 'utf8')) as JobResult;
   } catch {
-    result = runFamilyJob(job);
+    result = runFamilyJob(job, {}, inputs);
     // Write then rename, so that a parallel worker never reads half a file.
     mkdirSync(CACHE_DIR, { recursive: true });
     const partial = `${path}.${process.pid}.tmp`;
