@@ -3,7 +3,8 @@
 export interface ChartMember {
   id: string;
   seq: number;
-  href: string;
+  /** The member's page; null for members of a long family without a page of their own (site/lib/paged-members.ts). */
+  href: string | null;
   altKm: number; // minimum altitude above the smaller body
   nu: number; // in-plane stability index
   nuV: number; // vertical stability index

@@ -3,6 +3,7 @@
 // generator stores the located member and gives the row its arclength) or, when none sits exactly there,
 // the members on either side along the family (by continuation arclength).
 import type { BifurcationRow, OrbitRow } from '../../catalog-db/types.ts';
+import { membersBeside } from './members-beside.ts';
 import { orbitHref } from './page-links.ts';
 
 export interface MemberLink {
@@ -28,12 +29,7 @@ export function branchPoints(bifurcations: BifurcationRow[], members: OrbitRow[]
     .filter((b) => b.plane === 'vertical')
     .map((b) => {
       const at = members.find((o) => o.arclength === b.arclength);
-      let before: OrbitRow | undefined;
-      let after: OrbitRow | undefined;
-      for (const o of members) {
-        if (o.arclength <= b.arclength && (!before || o.arclength > before.arclength)) before = o;
-        if (o.arclength >= b.arclength && (!after || o.arclength < after.arclength)) after = o;
-      }
+      const { before, after } = membersBeside(members, b.arclength);
       return {
         bifurcation: b, verticalIndex: b.kind === 'tangent' ? 1 : -1, member: link(at),
         before: at ? null : link(before), after: at ? null : link(after),

@@ -2,6 +2,7 @@
 // reads every table into memory with lookups by id, and closes the file.
 import { resolve } from 'node:path';
 import { openCatalogForRead } from '../../catalog-db/open-catalog.ts';
+import { pagedMembers } from './paged-members.ts';
 import type {
   BifurcationRow, FamilyRow, HoldRadiusRow, ModelScreeningRow, OrbitRow, OrbitScreenings, RunRow, ScenarioMeta,
   SignatureChangeRow, StableWindowRow, SystemRow,
@@ -25,6 +26,10 @@ export interface CatalogSnapshot {
   orbitsByFamily: Map<string, OrbitRow[]>;
   /** Index of each orbit in its family's member list. */
   orbitIndexInFamily: Map<string, number>;
+  /** The orbits that get a page of their own (paged-members.ts), in family and seq order; the rest are in the charts and downloads. */
+  pagedOrbits: OrbitRow[];
+  pagedOrbitsByFamily: Map<string, OrbitRow[]>;
+  pagedOrbitIds: Set<string>;
   windowsByFamily: Map<string, StableWindowRow[]>;
   bifurcationsByFamily: Map<string, BifurcationRow[]>;
   holdRadiiByFamily: Map<string, HoldRadiusRow[]>;
@@ -78,6 +83,14 @@ export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
     const orbitsByFamily = groupBy(orbits, (o) => o.familyId);
     const orbitIndexInFamily = new Map<string, number>();
     for (const members of orbitsByFamily.values()) members.forEach((o, i) => orbitIndexInFamily.set(o.id, i));
+    const windowsByFamily = groupBy(stableWindows, (w) => w.familyId);
+    const bifurcationsByFamily = groupBy(bifurcations, (b) => b.familyId);
+    const screenings = screeningsByOrbit(holdRadii, modelScreenings);
+    const screenedOrbitIds = new Set(screenings.keys());
+    const pagedOrbitsByFamily = new Map([...orbitsByFamily].map(([familyId, members]) => [familyId, pagedMembers({
+      members, windows: windowsByFamily.get(familyId) ?? [], bifurcations: bifurcationsByFamily.get(familyId) ?? [], screenedOrbitIds,
+    })]));
+    const pagedOrbits = [...pagedOrbitsByFamily.values()].flat();
     return {
       dbPath,
       scenario: reader.scenario(),
@@ -94,11 +107,14 @@ export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
       orbitById: new Map(orbits.map((o) => [o.id, o])),
       orbitsByFamily,
       orbitIndexInFamily,
-      windowsByFamily: groupBy(stableWindows, (w) => w.familyId),
-      bifurcationsByFamily: groupBy(bifurcations, (b) => b.familyId),
+      pagedOrbits,
+      pagedOrbitsByFamily,
+      pagedOrbitIds: new Set(pagedOrbits.map((o) => o.id)),
+      windowsByFamily,
+      bifurcationsByFamily,
       holdRadiiByFamily: groupBy(holdRadii, (h) => h.familyId),
       signatureChangesByFamily: groupBy(reader.signatureChanges(), (c) => c.familyId),
-      screeningsByOrbit: screeningsByOrbit(holdRadii, modelScreenings),
+      screeningsByOrbit: screenings,
     };
   } finally {
     reader.close();

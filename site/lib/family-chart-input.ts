@@ -11,7 +11,7 @@ export function familyChartInput(catalog: CatalogSnapshot, familyId: string): Fa
     members: (catalog.orbitsByFamily.get(familyId) ?? []).map((o) => ({
       id: o.id,
       seq: o.seq,
-      href: orbitHref(o.id),
+      href: catalog.pagedOrbitIds.has(o.id) ? orbitHref(o.id) : null,
       altKm: o.secondaryMinAltKm,
       nu: o.stabilityIndex,
       nuV: o.verticalStabilityIndex,

@@ -2,6 +2,7 @@
 import type { OrbitRow, SystemRow } from '../../catalog-db/types.ts';
 import { memberLabel } from '../../catalog-db/member-label.ts';
 import { orbitHref } from './page-links.ts';
+import { spreadIndices } from './spread-indices.ts';
 import { THUMBNAIL_SAMPLES, plotSamples } from './plot-samples.ts';
 import { THUMBNAIL_FIGURE, trajectoryFigure, type TrajectoryFigure } from './trajectory-figures.ts';
 
@@ -12,11 +13,6 @@ export interface Thumbnail {
   figure: TrajectoryFigure | null;
 }
 
-/** Indices 0..n−1 spread evenly, first and last always included. */
-export function spreadIndices(n: number, count: number): number[] {
-  if (n <= count) return Array.from({ length: n }, (_, i) => i);
-  return [...new Set(Array.from({ length: count }, (_, k) => Math.round((k * (n - 1)) / (count - 1))))];
-}
 
 export function familyThumbnails(members: OrbitRow[], system: SystemRow, count = 12): Thumbnail[] {
   return spreadIndices(members.length, count).map((i) => {

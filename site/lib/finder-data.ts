@@ -8,7 +8,7 @@ import type { CatalogSnapshot } from './catalog-source.ts';
 import { orbitFieldSource } from './orbit-field-source.ts';
 
 export function finderData(catalog: CatalogSnapshot): FinderDataFile {
-  const sources: OrbitFieldSource[] = catalog.orbits.map((orbit) => orbitFieldSource(catalog, orbit));
+  const sources: OrbitFieldSource[] = catalog.pagedOrbits.map((orbit) => orbitFieldSource(catalog, orbit));
   const columns: Record<string, FinderColumnData> = {};
   for (const field of FINDER_FIELDS) {
     const values: FieldValue[] = sources.map((source) => field.get(source));

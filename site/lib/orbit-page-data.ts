@@ -24,6 +24,7 @@ export interface OrbitPageData {
   periodS: number;
   /** How many members the family has (the orbit's own number is its seq: catalog-db/member-label.ts). */
   memberCount: number;
+  /** The nearest members on either side that have a page (paged-members.ts). */
   previous: NeighbourLink | null;
   next: NeighbourLink | null;
   verticalStable: boolean;
@@ -43,7 +44,8 @@ export function orbitPageData(catalog: CatalogSnapshot, orbitId: string): OrbitP
   if (!orbit) throw new Error(`orbit ${JSON.stringify(orbitId)} is not in the catalog`);
   const { family, system } = requireFamily(catalog, orbit.familyId);
   const members = catalog.orbitsByFamily.get(family.id) ?? [];
-  const index = catalog.orbitIndexInFamily.get(orbit.id) ?? -1;
+  const paged = catalog.pagedOrbitsByFamily.get(family.id) ?? [];
+  const pagedIndex = paged.indexOf(orbit);
   const screenings = catalog.screeningsByOrbit.get(orbit.id) ?? null;
   return {
     orbit,
@@ -56,8 +58,8 @@ export function orbitPageData(catalog: CatalogSnapshot, orbitId: string): OrbitP
     periodDays: orbit.periodDays,
     periodS: orbit.period * system.timeUnitS,
     memberCount: members.length,
-    previous: neighbour(members[index - 1]),
-    next: neighbour(members[index + 1]),
+    previous: pagedIndex > 0 ? neighbour(paged[pagedIndex - 1]) : null,
+    next: pagedIndex >= 0 ? neighbour(paged[pagedIndex + 1]) : null,
     verticalStable: Math.abs(orbit.verticalStabilityIndex) < 1,
     synodicLock:
       orbit.synodicP !== null && orbit.synodicQ !== null
