@@ -2,7 +2,7 @@
 // core's one parser (core/orbits/lap-signature.ts), then held to the config's stricter rule. Stored orbits
 // may carry a count of 0 (E0M1), but a config entry asks for cyclers, which pass both bodies at least once;
 // and a count is written without leading zeros, so one family has one job key.
-import { formatSignature, parseSignature, type LapCounts } from '../core/orbits/lap-signature.ts';
+import { formatSignature, parseSignature, type LapCounts } from '../core/cr3bp/lap-signature.ts';
 
 /** n and m of "<P>n<S>m", or null if the text does not match or a count is outside 1..maxLaps. */
 export function parseConfigSignature(signature: string, primaryLetter: string, secondaryLetter: string, maxLaps: number): LapCounts | null {

@@ -1,7 +1,7 @@
 // Our chart look: sizes, fills, fonts, axis helpers and the member tooltip. The member classes (blue
 // circles / orange triangles, told apart by colour AND shape for the common colour-vision deficiencies;
 // bifurcations in near-black diamonds and squares) and what they mean per chart: chart-classes.ts.
-import { formatStabilityIndex } from '../lib/format-stability-index.ts';
+import { formatStabilityIndex } from '../format/format-stability-index.ts';
 import type { ChartClasses } from './chart-classes.ts';
 import { niceTicks } from './nice-ticks.ts';
 import type { ChartMember } from './chart-input.ts';

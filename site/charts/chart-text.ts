@@ -1,5 +1,5 @@
 // Text alternatives for the family charts: what a reader without the picture needs to know.
-import { formatStabilityIndex } from '../lib/format-stability-index.ts';
+import { formatStabilityIndex } from '../format/format-stability-index.ts';
 import type { FamilyChartInput } from './chart-input.ts';
 
 const fmtKm = (v: number) => `${v.toLocaleString('en-US', { maximumFractionDigits: 0 })} km`;

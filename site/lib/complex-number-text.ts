@@ -1,6 +1,6 @@
 // A complex number as two pieces of text, real part and "± imaginary i", so a page can let the imaginary
 // part wrap under the real one in a narrow cell instead of running into the next (8 significant digits).
-import { formatSig } from './format-number.ts';
+import { formatSig } from '../format/format-number.ts';
 
 export interface ComplexText {
   re: string;

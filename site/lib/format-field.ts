@@ -1,8 +1,8 @@
 // One orbit field's value as text for reading (finder cells, orbit page numbers), by the field's format
 // in the orbit-field table; a dash where there is no value.
 import type { FieldValue, OrbitField } from '../../catalog-db/orbit-field-types.ts';
-import { formatExact, formatFixed, formatPercent, formatSig } from './format-number.ts';
-import { formatStabilityIndex } from './format-stability-index.ts';
+import { formatExact, formatFixed, formatPercent, formatSig } from '../format/format-number.ts';
+import { formatStabilityIndex } from '../format/format-stability-index.ts';
 
 const DASH = '—';
 

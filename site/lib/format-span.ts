@@ -1,6 +1,6 @@
 // Ranges and widths that read right however narrow they are: a span "lo – hi" in ascending order whose ends
 // get more digits until they differ, and a width that is not zero never reading as zero.
-import { formatFixed, formatSig } from './format-number.ts';
+import { formatFixed, formatSig } from '../format/format-number.ts';
 
 export type DigitStyle = 'sig' | 'fixed';
 

@@ -8,7 +8,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { bicircularEquations, bicircularParameters, screenInModel, type ScreeningResult } from '../../generator/core/beyond/index.ts';
 import { createDop853Workspace, integrateDop853 } from '../../generator/core/dop853/index.ts';
 import { EventLocator } from '../../generator/core/events/event-locator.ts';
-import { countLaps } from '../../generator/core/orbits/lap-signature.ts';
+import { countLaps } from '../../generator/core/cr3bp/lap-signature.ts';
 import { lyapunovL1, MU, stableE1M1, TIME_UNIT_DAYS, type TestOrbit } from './helpers/earth-moon-orbits.ts';
 
 const SPAN_ND = (12 * 29.530589) / TIME_UNIT_DAYS;

@@ -15,7 +15,7 @@ import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
 import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
 import { BRAKE_SPEED_ND } from '../../generator/core/orbits/continue-family.ts';
 import { correctOnArc } from '../../generator/core/orbits/correct-on-arc.ts';
-import { formatSignature } from '../../generator/core/orbits/lap-signature.ts';
+import { formatSignature } from '../../generator/core/cr3bp/lap-signature.ts';
 import { storedOrbitFootprint } from '../../generator/core/orbits/audit-footprint.ts';
 import { EARTH_MOON, FOLD_JOB, SIGNATURE_CHANGE_INPUTS, SIGNATURE_CHANGE_JOB, jobResult } from './helpers/earth-moon-jobs.ts';
 import { odexFlow } from './helpers/odex-flow.ts';

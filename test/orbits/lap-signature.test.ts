@@ -7,7 +7,7 @@
 // prograde = same sense as the frame's rotation).
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { FamilyBundle } from '../../catalog-db/types.ts';
-import { countLaps, formatSignature, parseSignature, type AxisCrossing } from '../../generator/core/orbits/lap-signature.ts';
+import { countLaps, formatSignature, parseSignature, type AxisCrossing } from '../../generator/core/cr3bp/lap-signature.ts';
 import { E1M1_JOB, EARTH_MOON, jobResult } from './helpers/earth-moon-jobs.ts';
 import { axisCrossings } from './helpers/independent-analysis.ts';
 

@@ -11,7 +11,7 @@ import type { FamilyBundle, SignatureChangeRow } from '../../catalog-db/types.ts
 import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
 import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
 import type { FamilyJob } from '../../generator/core/orbits/family-job.ts';
-import { formatSignature } from '../../generator/core/orbits/lap-signature.ts';
+import { formatSignature } from '../../generator/core/cr3bp/lap-signature.ts';
 import { linkSignatureChanges, type LinkSummary } from '../../generator/run/link-signature-changes.ts';
 import { createFamilyPool, type FamilyPool } from '../../generator/run/worker-pool.ts';
 import { makeRunInput } from '../catalog-db/make-rows.ts';

@@ -11,7 +11,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runExportState } from '../../generator/cli/commands/export-state.ts';
 import { idToPath } from '../../site/lib/id-path.ts';
-import { formatStabilityIndex } from '../../site/lib/format-stability-index.ts';
+import { formatStabilityIndex } from '../../site/format/format-stability-index.ts';
 import { queryToState } from '../../site/scripts/finder/finder-query.ts';
 import { buildSite, REPO_ROOT } from './build-site.ts';
 import { builtPages } from './built-pages.ts';

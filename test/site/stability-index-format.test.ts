@@ -7,7 +7,7 @@ import { seededRandom } from '../../generator/core/random/seeded-random.ts';
 import { chartClasses } from '../../site/charts/chart-classes.ts';
 import { memberValues } from '../../site/charts/chart-style.ts';
 import { formatField } from '../../site/lib/format-field.ts';
-import { formatStabilityIndex } from '../../site/lib/format-stability-index.ts';
+import { formatStabilityIndex } from '../../site/format/format-stability-index.ts';
 import { finderRowHtml } from '../../site/scripts/finder/finder-row.ts';
 
 const side = (nu: number) => Math.sign(Math.abs(nu) - 1);

@@ -2,7 +2,7 @@
 // section (the return map is that many section crossings) and its lap counts (orbits/lap-signature.ts).
 import { spatialEquations } from '../cr3bp/equations-spatial.ts';
 import { assertMassRatio } from '../cr3bp/lagrange-points.ts';
-import { countLaps, type AxisCrossing, type LapCounts } from '../orbits/lap-signature.ts';
+import { countLaps, type AxisCrossing, type LapCounts } from '../cr3bp/lap-signature.ts';
 import { AxisCrossingWatch } from './axis-crossing-watch.ts';
 import { runWithAxisCrossings, type RunTolerance } from './run-with-axis-crossings.ts';
 import { isOnSection, startSection, type StartSection } from './start-section.ts';

@@ -19,7 +19,7 @@
 import { spatialEquations } from '../cr3bp/equations-spatial.ts';
 import { assertMassRatio } from '../cr3bp/lagrange-points.ts';
 import type { Rhs } from '../dop853/workspace.ts';
-import { countLaps, type LapCounts } from '../orbits/lap-signature.ts';
+import { countLaps, type LapCounts } from '../cr3bp/lap-signature.ts';
 import { AxisCrossingWatch } from './axis-crossing-watch.ts';
 import { bicircularEquations } from './bicircular-equations.ts';
 import { bicircularParameters, type BicircularParameters } from './bicircular-parameters.ts';

@@ -1,7 +1,6 @@
 // The Poincaré section through an orbit's start point: y = 0, ẏ with the start's sign, x on the start's
 // segment of the x-axis (far side of the larger primary, between the primaries, far side of the smaller one).
-import type { AxisSegment } from '../orbits/family-job.ts';
-import { axisSegmentOf } from '../orbits/axis-segment-of.ts';
+import { axisSegmentOf, type AxisSegment } from '../cr3bp/axis-segment.ts';
 
 export interface StartSection {
   mu: number;

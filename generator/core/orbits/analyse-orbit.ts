@@ -4,7 +4,7 @@ import { jacobiConstant } from '../cr3bp/jacobi-constant.ts';
 import { closestApproach } from '../events/closest-approach.ts';
 import type { EventHit, EventSpec } from '../events/event-spec.ts';
 import { propagate } from '../propagation/propagate.ts';
-import { countLaps, type AxisCrossing, type LapCounts } from './lap-signature.ts';
+import { countLaps, type AxisCrossing, type LapCounts } from '../cr3bp/lap-signature.ts';
 import { neckHalfWidth } from './neck-half-width.ts';
 import { eigenvaluePair, stabilityIndices } from './stability-indices.ts';
 import { orbitCheck } from './verify-orbit.ts';

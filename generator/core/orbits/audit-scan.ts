@@ -9,7 +9,7 @@ import { cachedScan } from './cached-scan.ts';
 import { PRECISION_LIMIT_INDEX } from './continue-family.ts';
 import { correctAtFixedX0, type CorrectorOptions } from './correct-on-arc.ts';
 import type { AxisSegment, FamilyJob } from './family-job.ts';
-import { parseSignature, type LapCounts } from './lap-signature.ts';
+import { parseSignature, type LapCounts } from '../cr3bp/lap-signature.ts';
 import type { OrbitFootprint } from './lies-on-family.ts';
 import type { ScanOptions, SeedCandidate } from './scan-axis-segment.ts';
 

@@ -5,7 +5,7 @@ import type { BifurcationRow, FamilyBundle, FamilyKind, OrbitRow, SignatureChang
 import type { EndReason } from './continue-family.ts';
 import type { FamilyMember } from './family-member.ts';
 import type { SystemSpec } from './family-job.ts';
-import { formatSignature } from './lap-signature.ts';
+import { formatSignature } from '../cr3bp/lap-signature.ts';
 import type { StabilityMap } from './locate-stability-changes.ts';
 import { synodicLock } from './synodic-lock.ts';
 

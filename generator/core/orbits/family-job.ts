@@ -5,7 +5,9 @@ import type { DiscoveryResult } from './discovery/discover-candidates.ts';
 import type { StoredFamily } from './stored-family-trace.ts';
 import type { Tolerance } from '../propagation/tolerance.ts';
 
-export type AxisSegment = 'far-primary' | 'between' | 'far-secondary';
+import type { AxisSegment } from '../cr3bp/axis-segment.ts';
+
+export type { AxisSegment };
 
 export type SeedRule =
   | {

@@ -4,7 +4,7 @@ export { verifyOrbit } from './verify-orbit.ts';
 export type { OrbitCheck } from './verify-orbit.ts';
 export { analyseOrbit } from './analyse-orbit.ts';
 export type { OrbitAnalysis, AnalysisContext } from './analyse-orbit.ts';
-export { countLaps, formatSignature, parseSignature } from './lap-signature.ts';
+export { countLaps, formatSignature, parseSignature } from '../cr3bp/lap-signature.ts';
 export { synodicLock } from './synodic-lock.ts';
 export { stabilityIndices, eigenvaluePair } from './stability-indices.ts';
 export { neckHalfWidth } from './neck-half-width.ts';

@@ -10,7 +10,7 @@ import { continueFamily, memberFrom, type ContinuationRules } from './continue-f
 import { correctAtFixedX0, type CorrectedOrbit, type CorrectorOptions } from './correct-on-arc.ts';
 import type { FamilyJob, JobHooks, JobInputs, JobResult } from './family-job.ts';
 import type { FamilyMember } from './family-member.ts';
-import { parseSignature } from './lap-signature.ts';
+import { parseSignature } from '../cr3bp/lap-signature.ts';
 import { footprintOf, liesOnFamily } from './lies-on-family.ts';
 import { locateStabilityChanges } from './locate-stability-changes.ts';
 import { lyapunovGuess, retrogradeGuess } from './reference-seeds.ts';
@@ -21,7 +21,7 @@ import { candidatesOfSignature, orderCandidates } from './discovery/order-candid
 import { refineCandidate } from './discovery/refine-candidate.ts';
 import { screenStableMembers } from './screen-stable-members.ts';
 import { asFamilyMembers, storedOrbitFootprint } from './audit-footprint.ts';
-import { axisSegmentOf } from './axis-segment-of.ts';
+import { axisSegmentOf } from '../cr3bp/axis-segment.ts';
 import { storedFamilyTrace } from './stored-family-trace.ts';
 
 interface Seed {

@@ -15,7 +15,7 @@ import type { HoldRadiusRow, ModelScreeningRow } from './screening-rows.ts';
 import { holdRadius } from '../beyond/hold-radius.ts';
 import { screenInModel, type ScreeningModel, type ScreeningResult } from '../beyond/screen-in-model.ts';
 import type { ScreeningSettings, SystemSpec } from './family-job.ts';
-import { parseSignature } from './lap-signature.ts';
+import { parseSignature } from '../cr3bp/lap-signature.ts';
 import { pickScreenedMembers } from './pick-screened-members.ts';
 import type { Tolerance } from '../propagation/tolerance.ts';
 

@@ -3,7 +3,7 @@
 // with the direction of ẏ there (same crossing count: the second half mirrors the first). A covered root
 // edge lies, to the grid's resolution, on a family already continued: discovery skips it.
 import type { AxisSegment } from '../family-job.ts';
-import { axisSegmentOf } from '../axis-segment-of.ts';
+import { axisSegmentOf } from '../../cr3bp/axis-segment.ts';
 
 /** One member of a family as the coverage reads it: both perpendicular crossings, ẏ there, and C. */
 export interface FamilyTracePoint {

@@ -1,10 +1,14 @@
 import type { AxisSegment } from '../family-job.ts';
-import type { LapCounts } from '../lap-signature.ts';
+import type { LapCounts } from '../../cr3bp/lap-signature.ts';
 
 /**
  * A grid edge across which the perpendicular-crossing residual ẋ_k changes sign continuously: a point of
  * the zero set of G_k(x0, C), i.e. (up to the grid's resolution) a symmetric periodic orbit.
  */
+export interface EndCounts extends LapCounts {
+  l1Passages: number;
+}
+
 export interface ZeroCandidate {
   segment: AxisSegment;
   direction: 1 | -1;
@@ -22,10 +26,12 @@ export interface ZeroCandidate {
   jacobiGuess: number;
   tHalfGuessNd: number;
   xHalfGuess: number;
-  /** Lap counts of the orbit at either end of the edge (one entry when both ends agree). */
-  laps: LapCounts[];
-  /** L1 neck passages over a period (the fewer of the two ends). */
-  l1Passages: number;
+  /**
+   * Lap counts and L1 neck passages over a period of the orbit at either end of the edge (one entry when
+   * both ends agree). The root between them may have either end's counts, so each end is kept whole: a
+   * root whose one end stays at the smaller body while the other passes the neck is still a cycler seed.
+   */
+  laps: EndCounts[];
   /** Connected piece of the zero set (per segment, direction and crossing count) the edge belongs to. */
   piece: number;
   /** Grid indices of the edge's first end (x index, level index). */

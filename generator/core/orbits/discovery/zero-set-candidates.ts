@@ -2,9 +2,8 @@
 // practice): every edge across which ẋ_k changes sign continuously, grouped into connected pieces.
 // A sign change across a jump (the k-th crossing is another crossing at the two ends, where a tangency
 // to y = 0 adds or removes a pair of crossings) is no root: its ends disagree in crossing time.
-import type { LapCounts } from '../lap-signature.ts';
 import { RECORD, residualIndex, type ResidualGrid } from './residual-grid.ts';
-import type { ZeroCandidate } from './zero-candidate.ts';
+import type { EndCounts, ZeroCandidate } from './zero-candidate.ts';
 
 /** Largest relative difference of the k-th crossing time between the two ends of a root edge. */
 export const MAX_CROSSING_TIME_CHANGE = 0.25;
@@ -29,7 +28,7 @@ class UnionFind {
   }
 }
 
-function lapsAt(grid: ResidualGrid, at: number): LapCounts & { l1Passages: number } {
+function lapsAt(grid: ResidualGrid, at: number): EndCounts {
   const { mu, records: r } = grid;
   const startPrimary = grid.segment === 'far-primary' && grid.direction < 0 ? 1 : 0;
   const startSecondary = grid.segment === 'far-secondary' && grid.direction > 0 ? 1 : 0;
@@ -52,16 +51,14 @@ function rootEdge(grid: ResidualGrid, k: number, i: number, j: number, i2: numbe
   const f = fa / (fa - fb);
   const lerp = (p: number, q: number) => p + f * (q - p);
   const lapsA = lapsAt(grid, a), lapsB = lapsAt(grid, b);
-  const same = lapsA.primaryLaps === lapsB.primaryLaps && lapsA.secondaryLaps === lapsB.secondaryLaps;
-  const strip = ({ primaryLaps, secondaryLaps }: LapCounts): LapCounts => ({ primaryLaps, secondaryLaps });
+  const same = lapsA.primaryLaps === lapsB.primaryLaps && lapsA.secondaryLaps === lapsB.secondaryLaps && lapsA.l1Passages === lapsB.l1Passages;
   const x0A = grid.xs[i]!, x0B = grid.xs[i2]!, jacobiA = grid.levels[j]!, jacobiB = grid.levels[j2]!;
   return {
     segment: grid.segment, direction: grid.direction, halfCrossings: k, along: j === j2 ? 'x' : 'jacobi',
     x0A, x0B, jacobiA, jacobiB, vxA: fa, vxB: fb,
     x0Guess: lerp(x0A, x0B), jacobiGuess: lerp(jacobiA, jacobiB),
     tHalfGuessNd: lerp(ta, tb), xHalfGuess: lerp(r[a + RECORD.x]!, r[b + RECORD.x]!),
-    laps: same ? [strip(lapsA)] : [strip(lapsA), strip(lapsB)],
-    l1Passages: Math.min(lapsA.l1Passages, lapsB.l1Passages),
+    laps: same ? [lapsA] : [lapsA, lapsB],
     piece: -1, i, j,
   };
 }
