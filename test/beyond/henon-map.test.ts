@@ -4,9 +4,9 @@
 // inside must stay on invariant curves and points well outside must escape. "Escape" and "stays" are
 // decided here by brute force (10⁵ iterates), independently of the criterion.
 import { describe, expect, it } from 'vitest';
-import {
-  circleOrderViolations, henonHoldRadius, henonStep, henonTrial, InvariantCurveJudge, normalFrame, weightedBirkhoffAverage,
-} from '../../generator/core/beyond/index.ts';
+import { circleOrderViolations, InvariantCurveJudge, normalFrame, weightedBirkhoffAverage } from '../../generator/core/beyond/index.ts';
+import { henonStep } from './helpers/henon-map.ts';
+import { henonHoldRadius, henonTrial } from './helpers/henon-hold-radius.ts';
 
 const COS_ALPHA = 0.24;
 const SIN_ALPHA = Math.sqrt(1 - COS_ALPHA * COS_ALPHA);

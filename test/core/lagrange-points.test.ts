@@ -2,9 +2,10 @@
 // (Szebehely 1967, ch. 4, for the points; Richardson 1980, Celest. Mech. 22, for the period formula).
 import { describe, expect, it } from 'vitest';
 import {
-  findSystemPreset, jacobiConstant, lagrangePoints, linearPlanarPeriod, massRatioOf, propagate, timeUnitSecondsOf,
+  findSystemPreset, jacobiConstant, lagrangePoints, massRatioOf, propagate, timeUnitSecondsOf,
   yAxisCrossing,
 } from '../../generator/core/index.ts';
+import { linearPlanarPeriod } from '../helpers/linear-planar-period.ts';
 
 const MU = 0.0121505842695; // Earth–Moon, DESIGN.md (from the JPL DE430 GMs)
 const TIME_UNIT_DAYS = 375190.262 / 86400; // DESIGN.md

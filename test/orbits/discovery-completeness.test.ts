@@ -8,7 +8,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { FamilyBundle } from '../../catalog-db/types.ts';
 import { storedOrbitFootprint } from '../../generator/core/orbits/audit-footprint.ts';
-import { auditJob } from '../../generator/core/orbits/audit-job.ts';
+import { auditJob } from './helpers/audit-job.ts';
 import type { LapSignatureJob } from '../../generator/core/orbits/audit-scan.ts';
 import { seededRandom } from '../../generator/core/random/seeded-random.ts';
 import { EARTH_MOON, jobResult } from './helpers/earth-moon-jobs.ts';

@@ -7,7 +7,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { FamilyBundle } from '../../catalog-db/types.ts';
 import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
-import { linearPlanarPeriod } from '../../generator/core/cr3bp/linear-planar-period.ts';
+import { linearPlanarPeriod } from '../helpers/linear-planar-period.ts';
 import { EARTH_MOON, LYAPUNOV_JOB, jobResult } from './helpers/earth-moon-jobs.ts';
 import { odexFlow } from './helpers/odex-flow.ts';
 

@@ -25,9 +25,6 @@ export { InvariantCurveJudge, DEFAULT_CURVE_JUDGE } from './invariant-curve-judg
 export type { CurveFailure, CurveJudgeSettings, CurveVerdict } from './invariant-curve-judge.ts';
 export { searchHoldRadius, checkSearchSettings } from './hold-radius-search.ts';
 export type { SearchResult, SearchSettings, Trial } from './hold-radius-search.ts';
-export { henonStep } from './henon-map.ts';
-export { henonHoldRadius, henonTrial } from './henon-hold-radius.ts';
-export type { HenonHoldOptions, HenonTrialDetail } from './henon-hold-radius.ts';
 export { sectionLinearMap } from './section-linear-map.ts';
 export type { SectionLinearMap } from './section-linear-map.ts';
 export { sectionMap, iterateSectionMap } from './section-return-map.ts';

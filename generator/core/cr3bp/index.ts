@@ -5,7 +5,6 @@ export { planarStmEquations } from './equations-planar-stm.ts';
 export { jacobiConstant } from './jacobi-constant.ts';
 export { lagrangePoints, assertMassRatio } from './lagrange-points.ts';
 export type { LagrangePoint } from './lagrange-points.ts';
-export { linearPlanarPeriod } from './linear-planar-period.ts';
 export { SYSTEM_PRESETS, findSystemPreset, massRatioOf, timeUnitSecondsOf } from './system-presets.ts';
 export type { SystemPreset } from './system-presets.ts';
 export { axisSpeedSquared } from './axis-speed-squared.ts';

@@ -2,8 +2,8 @@
 // d along the x-axis from the elliptic fixed point at the origin, N iterates per trial. The map's own check
 // before it is trusted with the Poincaré map of an orbit.
 import { henonStep } from './henon-map.ts';
-import { DEFAULT_CURVE_JUDGE, InvariantCurveJudge, type CurveJudgeSettings, type CurveVerdict } from './invariant-curve-judge.ts';
-import { searchHoldRadius, type SearchResult, type SearchSettings } from './hold-radius-search.ts';
+import { DEFAULT_CURVE_JUDGE, InvariantCurveJudge, type CurveJudgeSettings, type CurveVerdict } from '../../../generator/core/beyond/invariant-curve-judge.ts';
+import { searchHoldRadius, type SearchResult, type SearchSettings } from '../../../generator/core/beyond/hold-radius-search.ts';
 
 export interface HenonHoldOptions {
   iterates?: number;

@@ -2,10 +2,10 @@
 // segment and start direction of the job is scanned independently (audit-scan-tasks.ts), and each orbit
 // found is checked against the job's catalogued families (audit-tally.ts). Pure numerics, one thread; the
 // run layer (generator/run/audit-catalog.ts) runs the same tasks for all jobs at once, over workers.
-import type { StoredFootprint } from './audit-footprint.ts';
-import { auditScanTasks, runAuditScanTask, taskLabel } from './audit-scan-tasks.ts';
-import type { AuditOrbit, LapSignatureJob } from './audit-scan.ts';
-import { JobAuditTally } from './audit-tally.ts';
+import type { StoredFootprint } from '../../../generator/core/orbits/audit-footprint.ts';
+import { auditScanTasks, runAuditScanTask, taskLabel } from '../../../generator/core/orbits/audit-scan-tasks.ts';
+import type { AuditOrbit, LapSignatureJob } from '../../../generator/core/orbits/audit-scan.ts';
+import { JobAuditTally } from '../../../generator/core/orbits/audit-tally.ts';
 
 export interface JobAuditInput {
   job: LapSignatureJob;
