@@ -1,5 +1,5 @@
 // Built-in settings used where the config (or the one-family command line) leaves them out.
-// Rough first values, meant to be tuned: modest enough that the demo runs in minutes.
+// Built-in values: a discovery grid dense enough for the complete atlas, limits that only act as safety valves.
 import type { AxisSegment, FamilyLimits, ScreeningSettings } from '../core/orbits/family-job.ts';
 import type { SystemJacobiBounds } from './system-jacobi-bounds.ts';
 import { jacobiGridLevels } from '../core/orbits/discovery/jacobi-grid-levels.ts';
