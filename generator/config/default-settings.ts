@@ -46,7 +46,8 @@ export type SystemFreeLimits = Omit<FamilyLimits, 'jacobiMin' | 'jacobiMax'>;
 
 /**
  * A family ends for a reason of its own (continue-family.ts); the member limit is only a safety valve,
- * above all but one demo family (E2M2/cc reaches it: under investigation; the next longest has 2,299 members), and the unstable stop is
+ * far above any demo family (the longest had 2,299 members once the closed E2M2 family ended with closed-loop
+ * instead of going round it to the limit), and the unstable stop is
  * off unless a config asks for it.
  */
 export const DEFAULT_LIMITS: SystemFreeLimits = {

@@ -21,6 +21,7 @@ export const END_REASON_TERMS: readonly CodeTerm[] = [
   { code: 'lost-l1-passage', label: 'no longer passes L1', definition: 'The orbit stopped crossing the neck at the L1 point between the bodies.' },
   { code: 'precision-limit', label: 'beyond double precision', definition: 'A stability index passed 5e9 in size, or the orbit stated from its two perpendicular crossings gave different stability indices; past that, round-off in double precision is larger than what defines the orbit.' },
   { code: 'no-convergence', label: 'corrector did not converge', definition: 'Newton’s method could not close the next orbit from either perpendicular crossing.' },
+  { code: 'closed-loop', label: 'family closes on itself', definition: 'Continuation came back to an orbit it had already stored, moving the same way: the family is a closed curve of orbits (in start position and speed), and every member of it is stored once round.' },
   { code: 'unstable-far-from-windows', label: 'very unstable, far from stable stretches', definition: 'The catalog config asked to stop where a family becomes violently unstable far from any stable window.' },
   { code: 'interrupted', label: 'run interrupted', definition: 'The generator run stopped before this family ended; running it again goes on from here.' },
 ];

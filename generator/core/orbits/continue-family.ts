@@ -8,7 +8,7 @@ import type { FamilyMember } from './family-member.ts';
 export type EndReason =
   | 'member-limit' | 'jacobi-range' | 'period-limit' | 'collision-primary' | 'collision-secondary'
   | 'brake-orbit' | 'signature-change' | 'lost-l1-passage' | 'precision-limit' | 'no-convergence'
-  | 'unstable-far-from-windows' | 'interrupted';
+  | 'unstable-far-from-windows' | 'closed-loop' | 'interrupted';
 
 /**
  * Largest |ν| (either plane) of a member the catalog still trusts. Round-off in the half-period shot
@@ -119,6 +119,29 @@ const CLOSE_IN_STEP_ND = 6.4e-8;
  */
 const SMOOTH_CHANGE_SHARE = 0.75;
 
+/**
+ * A march back at its seed (either of the seed's crossings, same crossing count) within this many of its
+ * current steps, moving the same way, has gone round a closed family (an isola in (x0, ẏ0)); it needs to
+ * have travelled this many steps first, so that leaving the seed is not taken for coming back.
+ */
+const CLOSED_LOOP_STEPS = 1.5;
+const CLOSED_LOOP_MIN_TRAVEL_STEPS = 20;
+
+/** Whether `member`, reached with a step of `stepNd`, is back at `seed` moving along `tangent` as the march began. */
+function backAtSeed(member: FamilyMember, seed: FamilyMember, seedTangent: readonly [number, number], stepNd: number, travelled: number): boolean {
+  if (member.halfCrossings !== seed.halfCrossings || travelled < CLOSED_LOOP_MIN_TRAVEL_STEPS * stepNd) return false;
+  const near = (x: number, vy: number) => Math.hypot(member.x0 - x, member.vy0 - vy) < CLOSED_LOOP_STEPS * stepNd;
+  if (near(seed.x0, seed.vy0)) return member.tangent[0] * seedTangent[0] + member.tangent[1] * seedTangent[1] > 0.5;
+  return near(seed.xHalf, seed.vyHalf);
+}
+
+/** Whether the second march has come round to where the first one stopped (the same orbit, on a parallel course). */
+function meetsEnd(member: FamilyMember, end: FamilyMember, stepNd: number, travelled: number): boolean {
+  if (member.halfCrossings !== end.halfCrossings || travelled < CLOSED_LOOP_MIN_TRAVEL_STEPS * stepNd) return false;
+  if (Math.hypot(member.x0 - end.x0, member.vy0 - end.vy0) >= CLOSED_LOOP_STEPS * stepNd) return false;
+  return Math.abs(member.tangent[0] * end.tangent[0] + member.tangent[1] * end.tangent[1]) > 0.5;
+}
+
 /** Changes of the starting crossing one march may make (each re-states one orbit from its other crossing). */
 const MAX_CROSSING_SWITCHES = 8;
 
@@ -181,11 +204,14 @@ function acrossTangency(
 function march(
   context: AnalysisContext, start: FamilyMember, sign: 1 | -1, budget: number,
   rules: ContinuationRules, corrector: CorrectorOptions, hooks: ContinuationHooks, counted: { n: number },
+  meet?: FamilyMember,
 ): { members: FamilyMember[]; end: EndReason; beyond?: FamilyMember } {
   const members: FamilyMember[] = [];
   let current = start;
   let previous: FamilyMember | null = null;
   let tangent: [number, number] = [sign * start.tangent[0], sign * start.tangent[1]];
+  const seedTangent: readonly [number, number] = [...tangent];
+  let travelled = 0;
   let step = rules.initialStepNd;
   let unstableRun = 0;
   let switches = 0;
@@ -290,6 +316,9 @@ function march(
     accept(next);
     rejected = [];
     justSwitched = false;
+    travelled += Math.hypot(next.x0 - current.x0, next.vy0 - current.vy0);
+    if (backAtSeed(next, start, seedTangent, step, travelled)) return { members, end: 'closed-loop' };
+    if (meet && meetsEnd(next, meet, step, travelled)) return { members, end: 'closed-loop' };
     tangent = familyTangent(corrected!.shot, tangent);
     if (rules.unstableStop) {
       unstableRun = Math.abs(next.analysis.stabilityIndex) > rules.unstableStop.indexAbove ? unstableRun + 1 : 0;
@@ -311,11 +340,15 @@ export function continueFamily(
   const counted = { n: 1 };
   const budget = Math.max(0, rules.maxMembers - 1);
   const forward = march(context, seed, 1, Math.ceil(budget / 2), rules, corrector, hooks, counted);
-  const backward = march(context, seed, -1, budget - forward.members.length, rules, corrector, hooks, counted);
+  // Round a closed family and back: the other way would only go round it again.
+  const backward = forward.end === 'closed-loop' ? { members: [], end: 'closed-loop' as const }
+    : march(context, seed, -1, budget - forward.members.length, rules, corrector, hooks, counted, forward.members.at(-1));
+  // The backward march came round to where the forward one stopped: the family is closed at both ends.
+  const closed = backward.end === 'closed-loop';
   return {
     members: [...backward.members.reverse(), seed, ...forward.members],
     endReasonStart: backward.end,
-    endReasonEnd: forward.end,
+    endReasonEnd: closed ? 'closed-loop' : forward.end,
     ...(backward.beyond ? { beyondStart: backward.beyond } : {}),
     ...(forward.beyond ? { beyondEnd: forward.beyond } : {}),
   };
