@@ -24,8 +24,6 @@ export interface CatalogSnapshot {
   orbitById: Map<string, OrbitRow>;
   /** Members of each family in seq order. */
   orbitsByFamily: Map<string, OrbitRow[]>;
-  /** Index of each orbit in its family's member list. */
-  orbitIndexInFamily: Map<string, number>;
   /** The orbits that get a page of their own (paged-members.ts), in family and seq order; the rest are in the charts and downloads. */
   pagedOrbits: OrbitRow[];
   pagedOrbitsByFamily: Map<string, OrbitRow[]>;
@@ -81,8 +79,6 @@ export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
     const holdRadii = reader.holdRadii();
     const modelScreenings = reader.modelScreenings();
     const orbitsByFamily = groupBy(orbits, (o) => o.familyId);
-    const orbitIndexInFamily = new Map<string, number>();
-    for (const members of orbitsByFamily.values()) members.forEach((o, i) => orbitIndexInFamily.set(o.id, i));
     const windowsByFamily = groupBy(stableWindows, (w) => w.familyId);
     const bifurcationsByFamily = groupBy(bifurcations, (b) => b.familyId);
     const screenings = screeningsByOrbit(holdRadii, modelScreenings);
@@ -106,7 +102,6 @@ export function readCatalogSnapshot(dbPath: string): CatalogSnapshot {
       familyById: new Map(families.map((f) => [f.id, f])),
       orbitById: new Map(orbits.map((o) => [o.id, o])),
       orbitsByFamily,
-      orbitIndexInFamily,
       pagedOrbits,
       pagedOrbitsByFamily,
       pagedOrbitIds: new Set(pagedOrbits.map((o) => o.id)),

@@ -47,14 +47,14 @@ export function pagedMembers({ members, windows, bifurcations, screenedOrbitIds 
   if (members.length <= PAGE_EVERY_MEMBER_UP_TO) return [...members];
   const picked = new Set<number>(spreadIndices(members.length, SPREAD_PAGES_PER_FAMILY));
   for (const i of stableRunIndices(members)) picked.add(i);
-  const wanted = new Set([...windows.map((w) => w.midOrbitId), ...screenedOrbitIds]);
+  const wanted = new Set(windows.map((w) => w.midOrbitId));
   for (const b of bifurcations) {
     if (b.plane !== 'vertical') continue;
     const { before, after } = membersBeside(members, b.arclength);
     for (const o of [before, after]) if (o) wanted.add(o.id);
   }
   members.forEach((o, i) => {
-    if (wanted.has(o.id)) picked.add(i);
+    if (wanted.has(o.id) || screenedOrbitIds.has(o.id)) picked.add(i);
   });
   return [...picked].sort((a, b) => a - b).map((i) => members[i]);
 }

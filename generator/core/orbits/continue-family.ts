@@ -120,26 +120,24 @@ const CLOSE_IN_STEP_ND = 6.4e-8;
 const SMOOTH_CHANGE_SHARE = 0.75;
 
 /**
- * A march back at its seed (either of the seed's crossings, same crossing count) within this many of its
- * current steps, moving the same way, has gone round a closed family (an isola in (x0, ẏ0)); it needs to
- * have travelled this many steps first, so that leaving the seed is not taken for coming back.
+ * A march that comes back, moving the same way, to an orbit already stored (its seed, or where the other
+ * march stopped) within this many of its current steps has gone round a closed family (an isola in
+ * (x0, ẏ0)); it must have travelled this many steps first, so that leaving the seed is not taken for coming back.
  */
 const CLOSED_LOOP_STEPS = 1.5;
 const CLOSED_LOOP_MIN_TRAVEL_STEPS = 20;
 
-/** Whether `member`, reached with a step of `stepNd`, is back at `seed` moving along `tangent` as the march began. */
-function backAtSeed(member: FamilyMember, seed: FamilyMember, seedTangent: readonly [number, number], stepNd: number, travelled: number): boolean {
-  if (member.halfCrossings !== seed.halfCrossings || travelled < CLOSED_LOOP_MIN_TRAVEL_STEPS * stepNd) return false;
+/**
+ * Whether `member`, reached with a step of `stepNd` after `travelled`, is back at `target`: the same crossing
+ * count, within the closing distance and, when stated from the same crossing, with the stored tangents (both
+ * toward growing arclength) parallel. The seed may also be met stated from its other crossing, where the
+ * tangents are not comparable.
+ */
+function closesOn(member: FamilyMember, target: FamilyMember, stepNd: number, travelled: number): boolean {
+  if (member.halfCrossings !== target.halfCrossings || travelled < CLOSED_LOOP_MIN_TRAVEL_STEPS * stepNd) return false;
   const near = (x: number, vy: number) => Math.hypot(member.x0 - x, member.vy0 - vy) < CLOSED_LOOP_STEPS * stepNd;
-  if (near(seed.x0, seed.vy0)) return member.tangent[0] * seedTangent[0] + member.tangent[1] * seedTangent[1] > 0.5;
-  return near(seed.xHalf, seed.vyHalf);
-}
-
-/** Whether the second march has come round to where the first one stopped (the same orbit, on a parallel course). */
-function meetsEnd(member: FamilyMember, end: FamilyMember, stepNd: number, travelled: number): boolean {
-  if (member.halfCrossings !== end.halfCrossings || travelled < CLOSED_LOOP_MIN_TRAVEL_STEPS * stepNd) return false;
-  if (Math.hypot(member.x0 - end.x0, member.vy0 - end.vy0) >= CLOSED_LOOP_STEPS * stepNd) return false;
-  return Math.abs(member.tangent[0] * end.tangent[0] + member.tangent[1] * end.tangent[1]) > 0.5;
+  if (near(target.x0, target.vy0)) return member.tangent[0] * target.tangent[0] + member.tangent[1] * target.tangent[1] > 0.5;
+  return near(target.xHalf, target.vyHalf);
 }
 
 /** Changes of the starting crossing one march may make (each re-states one orbit from its other crossing). */
@@ -210,7 +208,6 @@ function march(
   let current = start;
   let previous: FamilyMember | null = null;
   let tangent: [number, number] = [sign * start.tangent[0], sign * start.tangent[1]];
-  const seedTangent: readonly [number, number] = [...tangent];
   let travelled = 0;
   let step = rules.initialStepNd;
   let unstableRun = 0;
@@ -317,8 +314,7 @@ function march(
     rejected = [];
     justSwitched = false;
     travelled += Math.hypot(next.x0 - current.x0, next.vy0 - current.vy0);
-    if (backAtSeed(next, start, seedTangent, step, travelled)) return { members, end: 'closed-loop' };
-    if (meet && meetsEnd(next, meet, step, travelled)) return { members, end: 'closed-loop' };
+    if (closesOn(next, start, step, travelled) || (meet && closesOn(next, meet, step, travelled))) return { members, end: 'closed-loop' };
     tangent = familyTangent(corrected!.shot, tangent);
     if (rules.unstableStop) {
       unstableRun = Math.abs(next.analysis.stabilityIndex) > rules.unstableStop.indexAbove ? unstableRun + 1 : 0;
