@@ -1,7 +1,10 @@
 // Root edges inside grid edges where the crossing structure changes too fast for the grid: the k-th
-// crossing time jumps between the edge's ends. Very unstable orbits have zero sets thinner than the grid
-// spacing (ẋ_k crosses zero within ~1e-4 in x0 while the crossing time changes by tens of per cent), so
-// such an edge is sampled again, SUBDIVISIONS times finer, and the sub-edges searched like grid edges.
+// crossing time jumps between the edge's ends, or one end reaches the k-th crossing and the other, started
+// as well, does not (it ran into a body first). Very unstable orbits have zero sets thinner than the grid
+// spacing (ẋ_k crosses zero within ~1e-4 in x0 while the crossing time changes by tens of per cent), and
+// families that end at a collision have their last roots beside the colliding starts, so such an edge is
+// sampled again, SUBDIVISIONS times finer, and the sub-edges searched like grid edges.
+import { axisSpeedSquared } from '../../cr3bp/axis-speed-squared.ts';
 import { computeResidualGrid, RECORD, residualIndex, type ResidualGrid, type ResidualGridOptions } from './residual-grid.ts';
 import type { ZeroCandidate } from './zero-candidate.ts';
 import { MAX_CROSSING_TIME_CHANGE, zeroSetCandidates } from './zero-set-candidates.ts';
@@ -9,10 +12,13 @@ import { MAX_CROSSING_TIME_CHANGE, zeroSetCandidates } from './zero-set-candidat
 export const SUBDIVISIONS = 8;
 
 function jumpsAt(grid: ResidualGrid, i: number, j: number): boolean {
+  const level = grid.levels[j]!;
+  const bothStart = axisSpeedSquared(grid.mu, grid.xs[i]!, level) > 0 && axisSpeedSquared(grid.mu, grid.xs[i + 1]!, level) > 0;
   for (let k = 1; k <= grid.maxHalfCrossings; k++) {
     const a = residualIndex(grid, i, j, k), b = residualIndex(grid, i + 1, j, k);
     const ta = grid.records[a + RECORD.t]!, tb = grid.records[b + RECORD.t]!;
     if (Number.isFinite(ta) && Number.isFinite(tb) && Math.abs(ta - tb) > MAX_CROSSING_TIME_CHANGE * Math.max(ta, tb)) return true;
+    if (bothStart && Number.isFinite(ta) !== Number.isFinite(tb)) return true;
   }
   return false;
 }
