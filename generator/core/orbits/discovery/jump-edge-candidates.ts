@@ -2,9 +2,11 @@
 // crossing time jumps between the edge's ends, or one end reaches the k-th crossing and the other, started
 // as well, does not (it ran into a body first). Very unstable orbits have zero sets thinner than the grid
 // spacing (ẋ_k crosses zero within ~1e-4 in x0 while the crossing time changes by tens of per cent), and
-// families that end at a collision have their last roots beside the colliding starts, so such an edge is
-// sampled again, SUBDIVISIONS times finer, and the sub-edges searched like grid edges.
+// families that end at a collision have their last roots beside the colliding starts; and a fold of a family
+// in C can put both branches' roots inside one cell (fold-dip-at.ts). Such an edge is sampled again,
+// SUBDIVISIONS times finer, and the sub-edges searched like grid edges.
 import { axisSpeedSquared } from '../../cr3bp/axis-speed-squared.ts';
+import { foldDipAt } from './fold-dip-at.ts';
 import { computeResidualGrid, RECORD, residualIndex, type ResidualGrid, type ResidualGridOptions } from './residual-grid.ts';
 import type { ZeroCandidate } from './zero-candidate.ts';
 import { MAX_CROSSING_TIME_CHANGE, zeroSetCandidates } from './zero-set-candidates.ts';
@@ -19,6 +21,7 @@ function jumpsAt(grid: ResidualGrid, i: number, j: number): boolean {
     const ta = grid.records[a + RECORD.t]!, tb = grid.records[b + RECORD.t]!;
     if (Number.isFinite(ta) && Number.isFinite(tb) && Math.abs(ta - tb) > MAX_CROSSING_TIME_CHANGE * Math.max(ta, tb)) return true;
     if (bothStart && Number.isFinite(ta) !== Number.isFinite(tb)) return true;
+    if (foldDipAt(grid, i, j, k) || foldDipAt(grid, i + 1, j, k)) return true;
   }
   return false;
 }
