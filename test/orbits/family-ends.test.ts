@@ -14,7 +14,7 @@ const KM = EARTH_MOON.lengthUnitKm;
 
 const DOCUMENTED_END_REASONS = [
   'member-limit', 'jacobi-range', 'period-limit', 'collision-primary', 'collision-secondary',
-  'brake-orbit', 'signature-change', 'lost-l1-passage', 'precision-limit', 'no-convergence', 'unstable-far-from-windows', 'interrupted',
+  'brake-orbit', 'signature-change', 'lost-l1-passage', 'precision-limit', 'no-convergence', 'unstable-far-from-windows', 'closed-loop', 'joins-family', 'interrupted',
 ];
 
 interface Approaches {

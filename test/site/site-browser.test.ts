@@ -24,7 +24,7 @@ import { serveStatic, type StaticSite } from './static-server.ts';
 const BASE = '/atlas/';
 /** Every end reason the generator stores (the EndReason type of generator/core/orbits/continue-family.ts). */
 const ALL_END_REASONS = ['member-limit', 'jacobi-range', 'period-limit', 'collision-primary', 'collision-secondary', 'brake-orbit',
-  'signature-change', 'lost-l1-passage', 'precision-limit', 'no-convergence', 'unstable-far-from-windows', 'interrupted'];
+  'signature-change', 'lost-l1-passage', 'precision-limit', 'no-convergence', 'unstable-far-from-windows', 'closed-loop', 'joins-family', 'interrupted'];
 const ARTIFACTS = join(REPO_ROOT, 'test-artifacts');
 
 let dir: string;

@@ -8,7 +8,7 @@ import type { FamilyMember } from './family-member.ts';
 export type EndReason =
   | 'member-limit' | 'jacobi-range' | 'period-limit' | 'collision-primary' | 'collision-secondary'
   | 'brake-orbit' | 'signature-change' | 'lost-l1-passage' | 'precision-limit' | 'no-convergence'
-  | 'unstable-far-from-windows' | 'closed-loop' | 'interrupted';
+  | 'unstable-far-from-windows' | 'closed-loop' | 'joins-family' | 'interrupted';
 
 /**
  * Largest |ν| (either plane) of a member the catalog still trusts. Round-off in the half-period shot
@@ -17,6 +17,15 @@ export type EndReason =
  * below round-off, so past it single shooting in double precision gives no meaningful orbit.
  */
 export const PRECISION_LIMIT_INDEX = 5e9;
+
+/**
+ * Below this |ν| round-off moves ν by about ε·|λ| < 1e-8 of itself, far less than the step rule allows: two
+ * statements of one orbit that disagree there, or a change that does not fall with the step, mean the
+ * corrector reached another orbit, so such an end is 'no-convergence', not 'precision-limit'.
+ */
+export const ROUND_OFF_VISIBLE_INDEX = PRECISION_LIMIT_INDEX / 100;
+
+const roundOffVisible = (m: FamilyMember) => Math.max(Math.abs(m.analysis.stabilityIndex), Math.abs(m.analysis.verticalStabilityIndex)) >= ROUND_OFF_VISIBLE_INDEX;
 
 /** |ẏ0| below this (≈ 1 m/s in Earth–Moon units) is a start on the zero-velocity curve: a brake orbit. */
 export const BRAKE_SPEED_ND = 1e-3;
@@ -237,7 +246,7 @@ function march(
     if (!other) return null;
     // One orbit has one monodromy: its two statements differing by more than the step rule allows mean
     // double precision no longer resolves ν here (it grows faster than round-off can follow).
-    if (tooFar(current, other.member, rules)) return 'precision-limit';
+    if (tooFar(current, other.member, rules)) return roundOffVisible(current) ? 'precision-limit' : null;
     switches++;
     // The orbit is stored once more as stated from there, so that neighbours always share a crossing.
     accept(other.member);
@@ -256,7 +265,7 @@ function march(
   const stuckEnd = (): EndReason => {
     if (rules.laps && Math.min(Math.abs(current.vy0), Math.abs(current.vyHalf)) < NEAR_BRAKE_SPEED_ND) return 'brake-orbit';
     const [longer, shorter] = rejected.slice(-2);
-    if (longer !== undefined && shorter !== undefined && Number.isFinite(longer) && shorter > SMOOTH_CHANGE_SHARE * longer) return 'precision-limit';
+    if (longer !== undefined && shorter !== undefined && Number.isFinite(longer) && shorter > SMOOTH_CHANGE_SHARE * longer && roundOffVisible(current)) return 'precision-limit';
     return 'no-convergence';
   };
   for (;;) {

@@ -12,6 +12,7 @@ import type { FamilyJob, JobHooks, JobInputs, JobResult } from './family-job.ts'
 import type { FamilyMember } from './family-member.ts';
 import { parseSignature } from '../cr3bp/lap-signature.ts';
 import { footprintOf, liesOnFamily } from './lies-on-family.ts';
+import { partOffKnownFamilies } from './part-off-known-families.ts';
 import { locateStabilityChanges } from './locate-stability-changes.ts';
 import { lyapunovGuess, retrogradeGuess } from './reference-seeds.ts';
 import { discoverCandidates, residualOptionsOf, type DiscoveryResult } from './discovery/discover-candidates.ts';
@@ -127,14 +128,17 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
       jobKey: job.key, familyLabel, familiesDone: continued.length, members, maxMembers: limits.maxMembers,
     });
     progress(1);
-    const result = continueFamily(context, start, rules, corrector, {
+    const continuation = continueFamily(context, start, rules, corrector, {
       onMember: progress,
       shouldStop: hooks.shouldStop,
     });
-    if (result.endReasonStart === 'interrupted' || result.endReasonEnd === 'interrupted') return 'interrupted';
-    // A seed off the known members can still lead back onto a known family (it was found beyond that
-    // family's ends or between sparse members): then it is that family again.
-    if (result.members.filter((m, i) => i % 4 === 0 && isKnown(m)).length >= 2) return 'known';
+    if (continuation.endReasonStart === 'interrupted' || continuation.endReasonEnd === 'interrupted') return 'interrupted';
+    // A seed off the known members can still lead onto a known family: it is that family again, or a part
+    // of it that the known one did not reach (kept up to where they meet). Sampled first: most do not touch.
+    const touches = continuation.members.some((m, i) => i % 4 === 0 && isKnown(m));
+    const parted = touches ? partOffKnownFamilies(continuation, start, isKnown) : { kind: 'new' as const, result: continuation };
+    if (parted.kind === 'known') return 'known';
+    const result = parted.result;
     continued.push(result.members);
     coverage?.addFamily(result.members.map((m) => ({ x0: m.x0, vy0: m.vy0, xHalf: m.xHalf, vyHalf: m.vyHalf, jacobi: m.analysis.jacobi, halfCrossings: m.halfCrossings })));
     const map = locateStabilityChanges(context, result.members, job.indexTolerance, corrector, hooks.shouldStop);
