@@ -6,28 +6,22 @@
 // The corrected orbit is checked with odex (npm reference integrator): a perpendicular crossing of the x-axis
 // at T/2 (mirror theorem, Roy & Ovenden 1955).
 import { describe, expect, it } from 'vitest';
-import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
 import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
-import { correctAtFixedX0, type CorrectorOptions } from '../../generator/core/orbits/correct-on-arc.ts';
-import { residualOptionsOf, type DiscoveryRequest } from '../../generator/core/orbits/discovery/discover-candidates.ts';
+import { correctAtFixedX0 } from '../../generator/core/orbits/correct-on-arc.ts';
+import { residualOptionsOf } from '../../generator/core/orbits/discovery/discover-candidates.ts';
 import { jumpEdgeCandidates } from '../../generator/core/orbits/discovery/jump-edge-candidates.ts';
 import { refineCandidate } from '../../generator/core/orbits/discovery/refine-candidate.ts';
 import { computeResidualGrid, RECORD, residualIndex } from '../../generator/core/orbits/discovery/residual-grid.ts';
 import { zeroSetCandidates } from '../../generator/core/orbits/discovery/zero-set-candidates.ts';
 import { EARTH_MOON } from './helpers/earth-moon-jobs.ts';
+import { EARTH_MOON_XL1, earthMoonDiscoveryRequest, TIGHT_CORRECTOR } from './helpers/earth-moon-discovery.ts';
 import { odexFlow } from './helpers/odex-flow.ts';
 
 const JACOBI = 3.061493;
 const HALF_CROSSINGS = 7;
-const CORRECTOR: CorrectorOptions = { rtol: 1e-12, atol: 1e-12, maxTimeNd: 40, residualTolerance: 2e-11, maxIterations: 12 };
-const [L1] = lagrangePoints(EARTH_MOON.mu);
+const CORRECTOR = TIGHT_CORRECTOR;
 
-const REQUEST: DiscoveryRequest = {
-  mu: EARTH_MOON.mu, segment: 'far-secondary', direction: 1, gridPoints: 2, levels: [JACOBI], maxHalfCrossings: HALF_CROSSINGS,
-  rtol: 1e-10, atol: 1e-10, maxHalfTimeNd: 20,
-  primaryRadiusNd: EARTH_MOON.primaryRadiusKm / EARTH_MOON.lengthUnitKm, secondaryRadiusNd: EARTH_MOON.secondaryRadiusKm / EARTH_MOON.lengthUnitKm,
-  xL1: L1!.x, reachNd: 1.2,
-};
+const REQUEST = earthMoonDiscoveryRequest({ segment: 'far-secondary', direction: 1, gridPoints: 2, levels: [JACOBI], maxHalfCrossings: HALF_CROSSINGS });
 
 describe('root edges beside a colliding start', () => {
   const xs = [1.053425, 1.054328];
@@ -48,7 +42,7 @@ describe('root edges beside a colliding start', () => {
       .map((root) => root && correctAtFixedX0(EARTH_MOON.mu, HALF_CROSSINGS, root.x0, root.vy0, CORRECTOR))
       .filter((o) => o !== null && o !== undefined);
     const e1m1 = orbits.find((o) => {
-      const a = analyseOrbit({ mu: EARTH_MOON.mu, xL1: L1!.x, rtol: 1e-12, atol: 1e-12 }, o.x0, o.vy0, 2 * o.shot.tHalfNd);
+      const a = analyseOrbit({ mu: EARTH_MOON.mu, xL1: EARTH_MOON_XL1, rtol: 1e-12, atol: 1e-12 }, o.x0, o.vy0, 2 * o.shot.tHalfNd);
       return a.laps.primaryLaps === 1 && a.laps.secondaryLaps === 1 && a.l1Passages >= 2;
     })!;
     expect(e1m1).toBeDefined();

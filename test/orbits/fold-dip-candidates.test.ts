@@ -6,10 +6,9 @@
 // The corrected orbits are checked with odex (npm reference integrator): a perpendicular crossing of the
 // x-axis at T/2 (mirror theorem, Roy & Ovenden 1955).
 import { describe, expect, it } from 'vitest';
-import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
 import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
-import { correctAtFixedX0, type CorrectorOptions } from '../../generator/core/orbits/correct-on-arc.ts';
-import { residualOptionsOf, type DiscoveryRequest } from '../../generator/core/orbits/discovery/discover-candidates.ts';
+import { correctAtFixedX0 } from '../../generator/core/orbits/correct-on-arc.ts';
+import { residualOptionsOf } from '../../generator/core/orbits/discovery/discover-candidates.ts';
 import { foldDipAt } from '../../generator/core/orbits/discovery/fold-dip-at.ts';
 import { jumpEdgeCandidates } from '../../generator/core/orbits/discovery/jump-edge-candidates.ts';
 import { refineCandidate } from '../../generator/core/orbits/discovery/refine-candidate.ts';
@@ -17,19 +16,14 @@ import { computeResidualGrid, RECORD, residualIndex } from '../../generator/core
 import { zeroSetCandidates } from '../../generator/core/orbits/discovery/zero-set-candidates.ts';
 import { segmentGrid } from '../../generator/core/orbits/scan-axis-segment.ts';
 import { EARTH_MOON } from './helpers/earth-moon-jobs.ts';
+import { EARTH_MOON_XL1, earthMoonDiscoveryRequest, TIGHT_CORRECTOR } from './helpers/earth-moon-discovery.ts';
 import { odexFlow } from './helpers/odex-flow.ts';
 
 const JACOBI = 3.17666;
 const HALF_CROSSINGS = 6;
-const CORRECTOR: CorrectorOptions = { rtol: 1e-12, atol: 1e-12, maxTimeNd: 40, residualTolerance: 2e-11, maxIterations: 12 };
-const [L1] = lagrangePoints(EARTH_MOON.mu);
+const CORRECTOR = TIGHT_CORRECTOR;
 
-const REQUEST: DiscoveryRequest = {
-  mu: EARTH_MOON.mu, segment: 'far-primary', direction: -1, gridPoints: 600, levels: [JACOBI], maxHalfCrossings: HALF_CROSSINGS,
-  rtol: 1e-10, atol: 1e-10, maxHalfTimeNd: 20,
-  primaryRadiusNd: EARTH_MOON.primaryRadiusKm / EARTH_MOON.lengthUnitKm, secondaryRadiusNd: EARTH_MOON.secondaryRadiusKm / EARTH_MOON.lengthUnitKm,
-  xL1: L1!.x, reachNd: 1.2,
-};
+const REQUEST = earthMoonDiscoveryRequest({ segment: 'far-primary', direction: -1, gridPoints: 600, levels: [JACOBI], maxHalfCrossings: HALF_CROSSINGS });
 
 describe('a fold whose two roots share a grid cell', () => {
   const all = segmentGrid(REQUEST.mu, REQUEST.segment, REQUEST.gridPoints, REQUEST);
@@ -54,7 +48,7 @@ describe('a fold whose two roots share a grid cell', () => {
       .map((root) => root && correctAtFixedX0(EARTH_MOON.mu, HALF_CROSSINGS, root.x0, root.vy0, CORRECTOR))
       .filter((o) => o !== null && o !== undefined)
       .filter((o) => {
-        const a = analyseOrbit({ mu: EARTH_MOON.mu, xL1: L1!.x, rtol: 1e-12, atol: 1e-12 }, o.x0, o.vy0, 2 * o.shot.tHalfNd);
+        const a = analyseOrbit({ mu: EARTH_MOON.mu, xL1: EARTH_MOON_XL1, rtol: 1e-12, atol: 1e-12 }, o.x0, o.vy0, 2 * o.shot.tHalfNd);
         return a.laps.primaryLaps === 3 && a.laps.secondaryLaps === 2 && a.l1Passages >= 2;
       });
     const distinct = [...new Set(orbits.map((o) => o.x0.toFixed(6)))];

@@ -7,29 +7,23 @@
 // is checked with odex (npm reference integrator): a perpendicular crossing of the x-axis at T/2 (mirror
 // theorem, Roy & Ovenden 1955).
 import { describe, expect, it } from 'vitest';
-import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
 import { analyseOrbit } from '../../generator/core/orbits/analyse-orbit.ts';
-import { correctAtFixedX0, type CorrectorOptions } from '../../generator/core/orbits/correct-on-arc.ts';
-import { residualOptionsOf, type DiscoveryRequest } from '../../generator/core/orbits/discovery/discover-candidates.ts';
+import { correctAtFixedX0 } from '../../generator/core/orbits/correct-on-arc.ts';
+import { residualOptionsOf } from '../../generator/core/orbits/discovery/discover-candidates.ts';
 import { candidatesOfSignature } from '../../generator/core/orbits/discovery/order-candidates.ts';
 import { refineCandidate } from '../../generator/core/orbits/discovery/refine-candidate.ts';
 import { computeResidualGrid } from '../../generator/core/orbits/discovery/residual-grid.ts';
 import { zeroSetCandidates } from '../../generator/core/orbits/discovery/zero-set-candidates.ts';
 import { EARTH_MOON } from './helpers/earth-moon-jobs.ts';
+import { EARTH_MOON_XL1, earthMoonDiscoveryRequest, TIGHT_CORRECTOR } from './helpers/earth-moon-discovery.ts';
 import { odexFlow } from './helpers/odex-flow.ts';
 
 const JACOBI = 3.0963278564275023;
 const HALF_CROSSINGS = 5;
 const E1M3 = { primaryLaps: 1, secondaryLaps: 3 };
-const CORRECTOR: CorrectorOptions = { rtol: 1e-12, atol: 1e-12, maxTimeNd: 40, residualTolerance: 2e-11, maxIterations: 12 };
-const [L1] = lagrangePoints(EARTH_MOON.mu);
+const CORRECTOR = TIGHT_CORRECTOR;
 
-const REQUEST: DiscoveryRequest = {
-  mu: EARTH_MOON.mu, segment: 'far-secondary', direction: 1, gridPoints: 41, levels: [JACOBI], maxHalfCrossings: HALF_CROSSINGS,
-  rtol: 1e-10, atol: 1e-10, maxHalfTimeNd: 20,
-  primaryRadiusNd: EARTH_MOON.primaryRadiusKm / EARTH_MOON.lengthUnitKm, secondaryRadiusNd: EARTH_MOON.secondaryRadiusKm / EARTH_MOON.lengthUnitKm,
-  xL1: L1!.x, reachNd: 1.2,
-};
+const REQUEST = earthMoonDiscoveryRequest({ segment: 'far-secondary', direction: 1, gridPoints: 41, levels: [JACOBI], maxHalfCrossings: HALF_CROSSINGS });
 
 describe('root edges between two lap signatures', () => {
   const xs = Array.from({ length: 41 }, (_, i) => 1.0734 + i * 1e-4);
@@ -49,7 +43,7 @@ describe('root edges between two lap signatures', () => {
     const root = refineCandidate(EARTH_MOON.mu, edge, residualOptionsOf(REQUEST))!;
     const orbit = correctAtFixedX0(EARTH_MOON.mu, HALF_CROSSINGS, root.x0, root.vy0, CORRECTOR)!;
     expect(orbit).not.toBeNull();
-    const analysis = analyseOrbit({ mu: EARTH_MOON.mu, xL1: L1!.x, rtol: 1e-12, atol: 1e-12 }, orbit.x0, orbit.vy0, 2 * orbit.shot.tHalfNd);
+    const analysis = analyseOrbit({ mu: EARTH_MOON.mu, xL1: EARTH_MOON_XL1, rtol: 1e-12, atol: 1e-12 }, orbit.x0, orbit.vy0, 2 * orbit.shot.tHalfNd);
     expect(analysis.laps).toEqual(E1M3);
     expect(analysis.l1Passages).toBeGreaterThanOrEqual(2);
     expect(orbit.shot.state[0]).toBeLessThan(-EARTH_MOON.mu); // the turn lies beyond the Earth

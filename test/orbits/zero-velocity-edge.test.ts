@@ -7,29 +7,24 @@
 // theorem, Roy & Ovenden 1955). The zero-velocity curve is where the start speed vanishes, 2Ω(x, 0) = C
 // (Szebehely 1967, ch. 4).
 import { describe, expect, it } from 'vitest';
-import { lagrangePoints } from '../../generator/core/cr3bp/lagrange-points.ts';
 import { axisSpeedSquared } from '../../generator/core/cr3bp/axis-speed-squared.ts';
 import { computeResidualGrid } from '../../generator/core/orbits/discovery/residual-grid.ts';
 import { zeroSetCandidates } from '../../generator/core/orbits/discovery/zero-set-candidates.ts';
 import { zeroVelocityEdgeCandidates } from '../../generator/core/orbits/discovery/zero-velocity-edge-candidates.ts';
 import type { ZeroCandidate } from '../../generator/core/orbits/discovery/zero-candidate.ts';
-import { residualOptionsOf, type DiscoveryRequest } from '../../generator/core/orbits/discovery/discover-candidates.ts';
+import { residualOptionsOf } from '../../generator/core/orbits/discovery/discover-candidates.ts';
 import { segmentGrid } from '../../generator/core/orbits/scan-axis-segment.ts';
 import { refineCandidate } from '../../generator/core/orbits/discovery/refine-candidate.ts';
-import { correctAtFixedX0, type CorrectorOptions } from '../../generator/core/orbits/correct-on-arc.ts';
+import { correctAtFixedX0 } from '../../generator/core/orbits/correct-on-arc.ts';
 import { EARTH_MOON } from './helpers/earth-moon-jobs.ts';
+import { earthMoonDiscoveryRequest, TIGHT_CORRECTOR } from './helpers/earth-moon-discovery.ts';
 import { odexFlow } from './helpers/odex-flow.ts';
 
 const JACOBI = 3.1015161751;
 const HALF_CROSSINGS = 4;
-const CORRECTOR: CorrectorOptions = { rtol: 1e-12, atol: 1e-12, maxTimeNd: 40, residualTolerance: 2e-11, maxIterations: 12 };
+const CORRECTOR = TIGHT_CORRECTOR;
 
-const REQUEST: DiscoveryRequest = {
-  mu: EARTH_MOON.mu, segment: 'far-primary', direction: -1, gridPoints: 300, levels: [JACOBI], maxHalfCrossings: HALF_CROSSINGS,
-  rtol: 1e-10, atol: 1e-10, maxHalfTimeNd: 20,
-  primaryRadiusNd: EARTH_MOON.primaryRadiusKm / EARTH_MOON.lengthUnitKm, secondaryRadiusNd: EARTH_MOON.secondaryRadiusKm / EARTH_MOON.lengthUnitKm,
-  xL1: lagrangePoints(EARTH_MOON.mu)[0]!.x, reachNd: 1.2,
-};
+const REQUEST = earthMoonDiscoveryRequest({ segment: 'far-primary', direction: -1, gridPoints: 300, levels: [JACOBI], maxHalfCrossings: HALF_CROSSINGS });
 
 describe('roots between the last grid point and the zero-velocity curve', () => {
   const xs = segmentGrid(REQUEST.mu, REQUEST.segment, REQUEST.gridPoints, REQUEST);
