@@ -54,6 +54,15 @@ describe('family ends and bodies', () => {
     expect(bundle.family.memberCount).toBe(bundle.orbits.length);
   });
 
+  it('takes no seed beyond the period limit as a family (it would be one orbit ended at its own start)', () => {
+    // The family's longest-period member handed to a job whose period limit lies just below that period.
+    const { bundle } = families[1];
+    const longest = bundle.orbits.reduce((a, b) => (b.period > a.period ? b : a));
+    const job = { ...E1M1_JOB, key: 'test:E1M1-period-limit', limits: { ...E1M1_JOB.limits, maxPeriodNd: 0.99 * longest.period } };
+    const result = jobResult(job, { handoffs: [{ state0: longest.state0, periodNd: longest.period }] });
+    expect(result.bundles).toEqual([]);
+  });
+
   it('follows the E1M1 family into the Moon at both ends (the flyby altitude goes to zero)', () => {
     // Physically this family ends where its lunar flyby meets the surface on both sides (see scratch/lyap.ts
     // E1M1); the tests below then check what such an end must satisfy.

@@ -84,7 +84,7 @@ export function memberFrom(context: AnalysisContext, corrected: CorrectedOrbit, 
 }
 
 /** Why this member may not join the family (started with ẏ0 of sign `direction`), or null when it may. */
-function endReasonOf(member: FamilyMember, direction: number, rules: ContinuationRules): EndReason | null {
+export function endReasonOf(member: FamilyMember, direction: number, rules: ContinuationRules): EndReason | null {
   const a = member.analysis;
   // ẏ0 through zero: the start crossing reached the zero-velocity curve (a brake orbit there). The march
   // goes on from the orbit's other crossing where it can; a family ends here when that crossing is a

@@ -6,7 +6,7 @@ import type { FamilyBundle, FamilyKind } from './family-rows.ts';
 import { lagrangePoints } from '../cr3bp/lagrange-points.ts';
 import type { AnalysisContext } from './analyse-orbit.ts';
 import { buildFamilyBundle } from './build-family-bundle.ts';
-import { continueFamily, memberFrom, type ContinuationRules } from './continue-family.ts';
+import { continueFamily, endReasonOf, memberFrom, type ContinuationRules } from './continue-family.ts';
 import { correctAtFixedX0, type CorrectedOrbit, type CorrectorOptions } from './correct-on-arc.ts';
 import type { FamilyJob, JobHooks, JobInputs, JobResult } from './family-job.ts';
 import type { FamilyMember } from './family-member.ts';
@@ -119,8 +119,10 @@ export function runFamilyJob(job: FamilyJob, hooks: JobHooks = {}, inputs: JobIn
     if (isKnown(start)) return 'known';
     if (laps && (a.laps.primaryLaps !== laps.primaryLaps || a.laps.secondaryLaps !== laps.secondaryLaps || a.l1Passages === 0)) return 'rejected';
     if (a.primaryMinDistanceNd < primaryRadiusNd || a.secondaryMinDistanceNd < secondaryRadiusNd) return 'rejected';
-    // Corrected at fixed x0, a seed can land outside the range; a family that enters it has seeds inside.
-    if (a.jacobi < limits.jacobiMin || a.jacobi > limits.jacobiMax) return 'rejected';
+    // Corrected at fixed x0, a seed can land outside the range (C, period, trusted |ν|); a family that enters
+    // it has seeds inside. Kept, such a seed was a family of one orbit ended at its own start.
+    const outside = endReasonOf(start, Math.sign(start.vy0), rules);
+    if (outside === 'jacobi-range' || outside === 'period-limit' || outside === 'precision-limit') return 'rejected';
 
     const letter = familyLetter(continued.length);
     const familyLabel = `${label}/${letter}`;
